@@ -1,0 +1,90 @@
+using System.Diagnostics;
+using System.Globalization;
+using Electrostat.Numerics.Multigrid;
+using Electrostat.Numerics.Solvers;
+using Electrostat.Numerics.Sparse;
+
+namespace Electrostat.Bench;
+
+/// <summary>
+/// Suite "amg": the numerics layer alone on a generated P1 Laplace problem (see <see cref="AmgBenchProblem"/>).
+/// Per case: symbolic + numeric assembly, AMG setup, PCG to 1e-10 relative residual from zero, then one more
+/// right-hand side with the same hierarchy. Times are medians over the repeats.
+/// Options: <c>--cells 125,250,500,1001</c> (cells per side; unknowns = (cells − 1)²), <c>--repeat 5</c>.
+/// </summary>
+internal sealed class AmgBench : IBenchSuite
+{
+    public string Name => "amg";
+
+    public int Run(string[] args)
+    {
+        int[] cells = [126, 251, 501, 1001];
+        int repeat = 5;
+        for (int i = 0; i + 1 < args.Length; i += 2)
+        {
+            switch (args[i])
+            {
+                case "--cells":
+                    cells = args[i + 1].Split(',').Select(s => int.Parse(s, CultureInfo.InvariantCulture)).ToArray();
+                    break;
+                case "--repeat":
+                    repeat = int.Parse(args[i + 1], CultureInfo.InvariantCulture);
+                    break;
+                default:
+                    Console.Error.WriteLine($"amg: unknown option {args[i]}");
+                    return 2;
+            }
+        }
+        var options = new PcgOptions { RelativeTolerance = 1e-10, MaxIterations = 200 };
+        bool allConverged = true;
+        foreach (int m in cells)
+        {
+            var problem = AmgBenchProblem.Create(m);
+            var b1 = problem.UnitLoad();
+            var rng = new Random(7);
+            var b2 = new double[problem.DofCount];
+            for (int i = 0; i < b2.Length; i++)
+            {
+                b2[i] = rng.NextDouble() - 0.5;
+            }
+            var assembly = new List<double>();
+            var setup = new List<double>();
+            var solve = new List<double>();
+            var extra = new List<double>();
+            int iterations = 0, extraIterations = 0;
+            string hierarchy = "";
+            for (int r = 0; r < repeat; r++)
+            {
+                GC.Collect();
+                var clock = Stopwatch.StartNew();
+                var plan = CsrAssemblyPlan.Create(problem.Triangles, 3, problem.DofOfNode, problem.DofCount);
+                var a = plan.Assemble(problem.ElementStiffness);
+                assembly.Add(clock.Elapsed.TotalSeconds);
+                clock.Restart();
+                var amg = SmoothedAggregationAmg.Build(a);
+                setup.Add(clock.Elapsed.TotalSeconds);
+                var x = new double[problem.DofCount];
+                var report = ConjugateGradient.Solve(a, b1, x, amg, options);
+                solve.Add(report.Seconds);
+                var x2 = new double[problem.DofCount];
+                var report2 = ConjugateGradient.Solve(a, b2, x2, amg, options);
+                extra.Add(report2.Seconds);
+                iterations = report.Iterations;
+                extraIterations = report2.Iterations;
+                allConverged &= report.Converged && report2.Converged;
+                hierarchy = $"levels={amg.Stats.Levels.Count} operator_complexity={amg.Stats.OperatorComplexity.ToString("F3", CultureInfo.InvariantCulture)} final_residual={report.FinalRelativeResidual.ToString("E2", CultureInfo.InvariantCulture)}";
+            }
+            double peakMb = Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024.0);
+            double asm = Median(assembly), set = Median(setup), sol = Median(solve), ext = Median(extra);
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"amg case=p1-square-{m} unknowns={problem.DofCount} iterations={iterations} setup_seconds={set:F3} solve_seconds={sol:F3} extra_rhs_seconds={ext:F3} peak_mb={peakMb:F0} assembly_seconds={asm:F3} total_seconds={asm + set + sol:F3} extra_rhs_iterations={extraIterations} {hierarchy}"));
+        }
+        return allConverged ? 0 : 1;
+    }
+
+    private static double Median(List<double> values)
+    {
+        var s = values.Order().ToArray();
+        return s.Length % 2 == 1 ? s[s.Length / 2] : 0.5 * (s[s.Length / 2 - 1] + s[s.Length / 2]);
+    }
+}
