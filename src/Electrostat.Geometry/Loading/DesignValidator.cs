@@ -1,0 +1,273 @@
+using System.Globalization;
+using Electrostat.Geometry.Model;
+using Electrostat.Geometry.Quantities;
+using Electrostat.Geometry.Regions;
+using Electrostat.Geometry.Shapes;
+using NetTopologySuite.Geometries;
+using NetTopologySuite.Operation.Distance;
+using Newtonsoft.Json.Linq;
+
+namespace Electrostat.Geometry.Loading;
+
+/// <summary>
+/// Cross-checks between bodies: enclosure, axis, containment, short circuits, merges and overlaps. Works on shapes
+/// flattened to a chord tolerance of 1e-6 of the design size; two bodies closer than 1e-5 of the design size count
+/// as touching (larger than twice the chord error, so tangent curved bodies are seen as touching).
+/// </summary>
+internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
+{
+    private static readonly string[] EnclosureKeys = ["shape", "margin", "potential", "symmetry_planes"];
+    private static readonly string[] PlaneKeys = ["x", "y"];
+
+    private ProblemSink Sink => ctx.Sink;
+
+    private double _chord;
+    private double _touch;
+
+    public Enclosure? BuildEnclosure(JToken? token, List<BodyDraft> conductors, List<BodyDraft> dielectrics)
+    {
+        if (ctx.AsObject(token, "enclosure") is not JObject obj) return null;
+        ctx.CheckKeys(obj, "the enclosure", EnclosureKeys);
+        double potential = ctx.Quantity(obj["potential"], QuantityKind.Potential, "enclosure potential") ?? 0;
+        Shape? shape;
+        bool shorthand = false;
+        if (obj["shape"] is not null && obj["margin"] is not null)
+        {
+            Sink.Error(obj, "the enclosure has both \"shape\" and \"margin\"", "keep \"shape\" for an explicit outline or \"margin\" for a box around everything");
+            return null;
+        }
+        if (obj["margin"] is { } marginToken)
+        {
+            shorthand = true;
+            double? margin = ctx.Quantity(marginToken, QuantityKind.Length, "margin", nonNegative: true);
+            if (margin is null) return null;
+            var box = BoundingBox.Empty;
+            foreach (var b in conductors.Concat(dielectrics)) box = box.Union(b.Shape.Bounds);
+            if (box.IsEmpty)
+            {
+                Sink.Error(marginToken, "the enclosure margin needs at least one body to surround", "add conductors, or give the enclosure an explicit \"shape\"");
+                return null;
+            }
+            box = box.Inflate(margin.Value);
+            // Axisymmetric boxes always start on the axis: the domain of revolution includes r = 0.
+            if (ctx.Symmetry == Symmetry.Axisymmetric) box = box with { MinX = 0 };
+            if (!(margin > 0) && ctx.Symmetry == Symmetry.Planar)
+                Sink.Warning(marginToken, "an enclosure margin of 0 makes the box touch the outermost bodies", "give a margin of a few times the largest gap");
+            shape = new Shape(ShapeFactory.Rectangle(new Point2(box.MinX, box.MinY), new Point2(box.MaxX, box.MaxY)));
+        }
+        else
+        {
+            shape = shapes.Read(ctx.Required(obj, "shape", "the enclosure", "add \"shape\": {...}, or \"margin\": 10 for a box around everything"), "the enclosure", allowHoles: false);
+            if (shape is null) return null;
+        }
+
+        double size = shape.Bounds.Diagonal;
+        _chord = 1e-6 * size;
+        _touch = 1e-5 * size;
+        double tol = 1e-9 * size;
+
+        // Markers: axis first (axisymmetric), then the requested symmetry planes.
+        var planes = new List<(bool IsX, double Value, JToken Token)>();
+        if (obj["symmetry_planes"] is { } spToken && ctx.AsArray(spToken, "symmetry_planes") is JArray sp)
+        {
+            foreach (var item in sp)
+            {
+                if (ctx.AsObject(item, "a symmetry plane") is not JObject po) continue;
+                ctx.CheckKeys(po, "a symmetry plane", PlaneKeys);
+                if (po.Count != 1)
+                {
+                    Sink.Error(po, "a symmetry plane is given as {\"x\": value} or {\"y\": value}", "write one key per plane, e.g. {\"x\": 0}");
+                    continue;
+                }
+                var prop = po.Properties().First();
+                if (prop.Name is not ("x" or "y")) continue;
+                if (ctx.Quantity(prop.Value, QuantityKind.Length, $"symmetry plane {prop.Name}") is double v)
+                    planes.Add((prop.Name == "x", v, po));
+            }
+        }
+        var used = new bool[planes.Count];
+        bool axisymmetric = ctx.Symmetry == Symmetry.Axisymmetric;
+        var marked = new Shape(shape.Outer.WithMarkers(seg =>
+        {
+            if (seg is not Shapes.LineSegment) return BoundaryMarker.None;
+            if (axisymmetric && Math.Abs(seg.Start.X) <= tol && Math.Abs(seg.End.X) <= tol) return BoundaryMarker.Axis;
+            for (int k = 0; k < planes.Count; k++)
+            {
+                var (isX, v, _) = planes[k];
+                bool on = isX
+                    ? Math.Abs(seg.Start.X - v) <= tol && Math.Abs(seg.End.X - v) <= tol
+                    : Math.Abs(seg.Start.Y - v) <= tol && Math.Abs(seg.End.Y - v) <= tol;
+                if (on) { used[k] = true; return BoundaryMarker.SymmetryPlane; }
+            }
+            return BoundaryMarker.None;
+        }));
+        for (int k = 0; k < planes.Count; k++)
+        {
+            if (used[k]) continue;
+            var (isX, v, t) = planes[k];
+            Sink.Error(t, string.Create(CultureInfo.InvariantCulture, $"no straight enclosure edge lies on {(isX ? "x" : "y")} = {UnitTable.Format(v, QuantityKind.Length)}"),
+                "a symmetry plane must coincide with a straight edge of the enclosure; check the value");
+        }
+        if (axisymmetric && shape.Bounds.MinX < -tol)
+        {
+            var p = shape.Outer.Flatten(_chord).MinBy(q => q.X);
+            Sink.Error(obj, "the enclosure reaches r < 0 in an axisymmetric design", "keep every x (radius) ≥ 0; put the enclosure's inner edge on the axis x = 0", p);
+            return null;
+        }
+        return new Enclosure(marked, potential, shorthand);
+    }
+
+    public List<Electrode>? Validate(Enclosure enclosure, List<BodyDraft> conductors, List<BodyDraft> dielectrics)
+    {
+        bool axisymmetric = ctx.Symmetry == Symmetry.Axisymmetric;
+        var enclosurePoly = NtsShapes.ToPolygon(enclosure.Shape, _chord);
+        double areaTol = _touch * _touch;
+        bool ok = true;
+
+        // r < 0 and outside the enclosure.
+        var all = conductors.Select(c => (Body: c, Kind: "conductor")).Concat(dielectrics.Select(d => (Body: d, Kind: "dielectric"))).ToList();
+        var polys = new Dictionary<BodyDraft, Polygon>();
+        foreach (var (b, kind) in all)
+        {
+            var poly = NtsShapes.ToPolygon(b.Shape, _chord);
+            polys[b] = poly;
+            if (axisymmetric && b.Shape.Bounds.MinX < -1e-9 * enclosure.Shape.Bounds.Diagonal)
+            {
+                var p = b.Shape.Outer.Flatten(_chord).MinBy(q => q.X);
+                Sink.Error(b.Token["shape"] ?? b.Token, $"{kind} \"{b.Name}\" reaches r < 0 in an axisymmetric design",
+                    "keep every x (radius) ≥ 0: a body of revolution is drawn on the r ≥ 0 side only", p);
+                ok = false;
+                continue;
+            }
+            var outside = poly.Difference(enclosurePoly);
+            if (outside.Area > areaTol)
+            {
+                Sink.Error(b.Token["shape"] ?? b.Token, $"{kind} \"{b.Name}\" lies (partly) outside the enclosure",
+                    "move or shrink it, or enlarge the enclosure", NtsShapes.ToPoint(outside.InteriorPoint.Coordinate));
+                ok = false;
+            }
+        }
+        if (!ok) return null;
+
+        // Enclosure edges held at the enclosure potential (not symmetry planes, not the axis).
+        var wallLines = enclosure.Shape.Outer.Segments
+            .Where(s => s.Marker == BoundaryMarker.None)
+            .Select(s =>
+            {
+                var pts = new List<Point2> { s.Start };
+                s.AppendFlattened(pts, _chord, double.PositiveInfinity);
+                return (LineString)NtsShapes.Factory.CreateLineString(pts.Select(p => new Coordinate(p.X, p.Y)).ToArray());
+            }).ToArray();
+        var wall = NtsShapes.Factory.CreateMultiLineString(wallLines);
+
+        // Union-find of touching conductors that may be joined.
+        int n = conductors.Count;
+        var parent = Enumerable.Range(0, n).ToArray();
+        int Find(int i) => parent[i] == i ? i : parent[i] = Find(parent[i]);
+        var touchesWall = new bool[n];
+        for (int i = 0; i < n; i++)
+        {
+            var a = conductors[i];
+            if (wallLines.Length > 0)
+            {
+                var d = new DistanceOp(polys[a], wall);
+                if (d.Distance() <= _touch)
+                {
+                    var at = NtsShapes.ToPoint(d.NearestPoints()[0]);
+                    if (a.PotentialVolts is null)
+                    {
+                        Sink.Error(a.Token, $"floating conductor \"{a.Name}\" touches the enclosure, which is held at {UnitTable.Format(enclosure.PotentialVolts, QuantityKind.Potential)}",
+                            "move it away from the enclosure wall, or give it the enclosure's potential", at);
+                        ok = false;
+                    }
+                    else if (a.PotentialVolts.Value != enclosure.PotentialVolts)
+                    {
+                        Sink.Error(a.Token, $"short circuit: conductor \"{a.Name}\" at {UnitTable.Format(a.PotentialVolts.Value, QuantityKind.Potential)} touches the enclosure at {UnitTable.Format(enclosure.PotentialVolts, QuantityKind.Potential)}",
+                            "move it away from the enclosure wall, or set its potential to the enclosure's", at);
+                        ok = false;
+                    }
+                    else
+                    {
+                        touchesWall[i] = true;
+                        Sink.Note(a.Token, $"conductor \"{a.Name}\" touches the enclosure wall and is part of it (same potential)", null, at);
+                    }
+                }
+            }
+            for (int j = 0; j < i; j++)
+            {
+                var b = conductors[j];
+                var op = new DistanceOp(polys[a], polys[b]);
+                if (op.Distance() > _touch) continue;
+                var at = NtsShapes.ToPoint(op.NearestPoints()[0]);
+                bool overlap = polys[a].Intersection(polys[b]).Area > areaTol;
+                string how = overlap ? "overlap" : "touch";
+                if (a.PotentialVolts is null != b.PotentialVolts is null)
+                {
+                    var (fl, fx) = a.PotentialVolts is null ? (a, b) : (b, a);
+                    Sink.Error(a.Token, $"floating conductor \"{fl.Name}\" and fixed conductor \"{fx.Name}\" {how}: the floating one would simply take the fixed potential",
+                        $"separate them, or give \"{fl.Name}\" the potential of \"{fx.Name}\"", at);
+                    ok = false;
+                }
+                else if (a.PotentialVolts is double va && b.PotentialVolts is double vb && va != vb)
+                {
+                    Sink.Error(a.Token, $"short circuit: conductors \"{b.Name}\" ({UnitTable.Format(vb, QuantityKind.Potential)}) and \"{a.Name}\" ({UnitTable.Format(va, QuantityKind.Potential)}) {how}",
+                        "separate them, or give them the same potential", at);
+                    ok = false;
+                }
+                else
+                {
+                    parent[Find(i)] = Find(j);
+                    Sink.Note(a.Token, $"conductors \"{b.Name}\" and \"{a.Name}\" {how} and are at the same potential: they are merged into one electrode", null, at);
+                }
+            }
+        }
+
+        // Dielectric overlaps (the later entry wins; a partial overlap is often a drawing slip).
+        for (int i = 0; i < dielectrics.Count; i++)
+        {
+            for (int j = i + 1; j < dielectrics.Count; j++)
+            {
+                var a = polys[dielectrics[i]];
+                var b = polys[dielectrics[j]];
+                if (!a.EnvelopeInternal.Intersects(b.EnvelopeInternal)) continue;
+                var inter = a.Intersection(b);
+                if (inter.Area <= areaTol) continue;
+                var at = NtsShapes.ToPoint(inter.InteriorPoint.Coordinate);
+                if (a.Difference(b).Area <= areaTol)
+                {
+                    Sink.Warning(dielectrics[i].Token, $"dielectric \"{dielectrics[i].Name}\" lies entirely inside the later dielectric \"{dielectrics[j].Name}\" and has no effect",
+                        $"move \"{dielectrics[i].Name}\" after \"{dielectrics[j].Name}\" in the list if it should be an inclusion", at);
+                }
+                else if (b.Difference(a).Area > areaTol)
+                {
+                    Sink.Warning(dielectrics[j].Token, $"dielectrics \"{dielectrics[i].Name}\" and \"{dielectrics[j].Name}\" partly overlap; the later one, \"{dielectrics[j].Name}\", fills the overlap",
+                        "make the outlines meet edge to edge if the overlap is not intended", at);
+                }
+            }
+        }
+
+        // A design needs two different potentials, or a charged floating conductor, to have any field.
+        var potentials = conductors.Where(c => c.PotentialVolts is not null).Select(c => c.PotentialVolts!.Value).ToHashSet();
+        if (wallLines.Length > 0) potentials.Add(enclosure.PotentialVolts);
+        bool charged = conductors.Any(c => c.ChargeCoulombs is double q && q != 0);
+        if (potentials.Count < 2 && !charged)
+        {
+            Sink.Warning(null, "the design has no potential difference: every conductor and the enclosure are at the same potential, so the field is zero everywhere",
+                "give at least one conductor a different potential, or a floating conductor a charge");
+        }
+        if (!ok) return null;
+
+        // Electrodes in order of their first conductor.
+        var groups = Enumerable.Range(0, n).GroupBy(Find).OrderBy(g => g.Min()).ToList();
+        var electrodes = new List<Electrode>();
+        foreach (var g in groups)
+        {
+            var members = g.OrderBy(i => i).ToList();
+            var first = conductors[members[0]];
+            string name = string.Join("+", members.Select(i => conductors[i].Name));
+            double? charge = first.PotentialVolts is null ? members.Sum(i => conductors[i].ChargeCoulombs ?? 0) : null;
+            electrodes.Add(new Electrode(electrodes.Count, name, members, first.PotentialVolts, charge, members.Any(i => touchesWall[i])));
+        }
+        return electrodes;
+    }
+}
