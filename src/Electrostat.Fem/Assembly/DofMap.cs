@@ -1,0 +1,135 @@
+using System.Diagnostics;
+
+namespace Electrostat.Fem.Assembly;
+
+/// <summary>
+/// Which unknown (degree of freedom) each mesh vertex belongs to. Vertices held at a known potential (Dirichlet)
+/// map to −1; the vertices of a floating conductor, and the matched vertex pairs of a Kelvin open boundary, share one
+/// unknown (degree-of-freedom merging).
+/// </summary>
+internal sealed class DofMap
+{
+    private DofMap(int[] dofOfNode, int dofCount, int[] terminalOfNode, bool[] terminalIsFixed, int[] floatingDof)
+    {
+        DofOfNode = dofOfNode;
+        DofCount = dofCount;
+        TerminalOfNode = terminalOfNode;
+        TerminalIsFixed = terminalIsFixed;
+        FloatingDof = floatingDof;
+    }
+
+    /// <summary>Unknown of each vertex, or −1 when its potential is known.</summary>
+    public int[] DofOfNode { get; }
+
+    /// <summary>Number of unknowns.</summary>
+    public int DofCount { get; }
+
+    /// <summary>Terminal of each vertex after merging (a merged group shares its terminal), or −1.</summary>
+    public int[] TerminalOfNode { get; }
+
+    /// <summary>Whether each terminal's potential is known.</summary>
+    public bool[] TerminalIsFixed { get; }
+
+    /// <summary>The shared unknown of each floating conductor, −1 for fixed conductors.</summary>
+    public int[] FloatingDof { get; }
+
+    /// <summary>
+    /// Builds the map. With <paramref name="floatingAsFixed"/> every conductor is held at a known potential (the
+    /// capacitance-matrix solves); otherwise floating conductors become one merged unknown each (the design solve).
+    /// </summary>
+    public static DofMap Build(CompiledProblem cp, bool floatingAsFixed)
+    {
+        int n = cp.Mesh.VertexCount;
+        var parent = new int[n];
+        for (int i = 0; i < n; i++) parent[i] = i;
+
+        foreach (var (a, b) in cp.MergePairs) Union(parent, a, b);
+
+        var fixedTerminal = new bool[cp.TerminalCount];
+        for (int k = 0; k < cp.ConductorCount; k++)
+        {
+            fixedTerminal[k] = floatingAsFixed || !cp.Problem.Conductors[k].IsFloating;
+        }
+        fixedTerminal[cp.EnclosureTerminal] = true;
+        fixedTerminal[cp.InfinityTerminal] = true;
+
+        var firstOfFloating = new int[cp.ConductorCount];
+        Array.Fill(firstOfFloating, -1);
+        for (int i = 0; i < n; i++)
+        {
+            int t = cp.NodeTerminal[i];
+            if (t >= 0 && t < cp.ConductorCount && !fixedTerminal[t])
+            {
+                if (firstOfFloating[t] < 0) firstOfFloating[t] = i;
+                else Union(parent, firstOfFloating[t], i);
+            }
+        }
+
+        // Terminal of each merged group; a group may not join two different terminals.
+        var rootTerminal = new int[n];
+        Array.Fill(rootTerminal, -1);
+        for (int i = 0; i < n; i++)
+        {
+            int t = cp.NodeTerminal[i];
+            if (t < 0) continue;
+            int r = Find(parent, i);
+            if (rootTerminal[r] >= 0 && rootTerminal[r] != t)
+            {
+                throw new FieldProblemException($"Mesh vertex {i} joins {cp.TerminalName(rootTerminal[r])} and {cp.TerminalName(t)} through the open boundary's matched arcs: keep conductors off the open-boundary circle.");
+            }
+            rootTerminal[r] = t;
+        }
+
+        var dofOfRoot = new int[n];
+        Array.Fill(dofOfRoot, -1);
+        var dofOfNode = new int[n];
+        var terminalOfNode = new int[n];
+        int count = 0;
+        for (int i = 0; i < n; i++)
+        {
+            int r = Find(parent, i);
+            int t = rootTerminal[r];
+            terminalOfNode[i] = t;
+            if (t >= 0 && fixedTerminal[t])
+            {
+                dofOfNode[i] = -1;
+                continue;
+            }
+            if (dofOfRoot[r] < 0) dofOfRoot[r] = count++;
+            dofOfNode[i] = dofOfRoot[r];
+        }
+
+        var floatingDof = new int[cp.ConductorCount];
+        for (int k = 0; k < cp.ConductorCount; k++)
+        {
+            floatingDof[k] = fixedTerminal[k] ? -1 : dofOfNode[firstOfFloating[k]];
+        }
+
+        bool anyFixed = false;
+        for (int i = 0; i < n && !anyFixed; i++) anyFixed = dofOfNode[i] < 0;
+        if (!anyFixed)
+        {
+            throw new FieldProblemException("No vertex has a known potential, so the potential is undetermined: add an enclosure, a fixed-potential conductor, or (axisymmetric) an open boundary.");
+        }
+        Debug.Assert(count > 0 || n > 0);
+        return new DofMap(dofOfNode, count, terminalOfNode, fixedTerminal, floatingDof);
+    }
+
+    private static int Find(int[] parent, int i)
+    {
+        while (parent[i] != i)
+        {
+            parent[i] = parent[parent[i]];
+            i = parent[i];
+        }
+        return i;
+    }
+
+    private static void Union(int[] parent, int a, int b)
+    {
+        int ra = Find(parent, a), rb = Find(parent, b);
+        if (ra == rb) return;
+        if (ra < rb) parent[rb] = ra;
+        else parent[ra] = rb;
+    }
+}

@@ -1,0 +1,27 @@
+using Electrostat.Fem.Problem;
+using Electrostat.Meshing;
+
+namespace Electrostat.Fem.Tests.Support;
+
+/// <summary>Shorthands for building test problems.</summary>
+internal static class Problems
+{
+    public const double Eps0 = Electrostat.Fem.Elements.PhysicalConstants.VacuumPermittivity;
+
+    public static ElectrostaticProblem Make(TriangleMesh mesh, IReadOnlyList<Conductor> conductors,
+        Dictionary<int, BoundaryRole> roles, Dictionary<int, Material>? materials = null, Symmetry symmetry = Symmetry.Planar) =>
+        new()
+        {
+            Mesh = mesh,
+            Symmetry = symmetry,
+            Conductors = conductors,
+            Boundaries = roles,
+            Materials = materials ?? mesh.TriangleRegion.Distinct().ToDictionary(r => r, _ => Material.Vacuum),
+        };
+
+    public static BoundaryRole On(int conductor) => new ConductorBoundary(conductor);
+
+    public static BoundaryRole Enclosure(double v = 0) => new EnclosureBoundary(v);
+
+    public static BoundaryRole Natural => new NaturalBoundary();
+}
