@@ -1,0 +1,52 @@
+namespace Electrostat.Meshing.Output;
+
+/// <summary>Quality statistics of a mesh. Angles in degrees.</summary>
+/// <param name="TriangleCount">Number of triangles.</param>
+/// <param name="VertexCount">Number of vertices.</param>
+/// <param name="MinAngleDegrees">Smallest angle of any triangle.</param>
+/// <param name="MaxAngleDegrees">Largest angle of any triangle.</param>
+/// <param name="AngleHistogram">Counts of all triangle angles (three per triangle) in 10° bins: bin k holds angles in [10k, 10k+10).</param>
+/// <param name="BelowBoundCount">Triangles whose smallest angle is below the requested bound (all of them are listed in <see cref="MeshResult.SkippedTriangles"/>).</param>
+public sealed record MeshQuality(int TriangleCount, int VertexCount, double MinAngleDegrees, double MaxAngleDegrees, int[] AngleHistogram, int BelowBoundCount)
+{
+    /// <summary>Computes the statistics of a mesh.</summary>
+    /// <param name="mesh">The mesh.</param>
+    /// <param name="boundDegrees">The minimum-angle bound to count against.</param>
+    /// <returns>The statistics.</returns>
+    public static MeshQuality Of(TriangleMesh mesh, double boundDegrees)
+    {
+        ArgumentNullException.ThrowIfNull(mesh);
+        var hist = new int[18];
+        double minA = 180, maxA = 0;
+        int below = 0;
+        Span<double> ang = stackalloc double[3];
+        for (int t = 0; t < mesh.TriangleCount; t++)
+        {
+            TriangleAngles(mesh, t, ang);
+            double lo = Math.Min(ang[0], Math.Min(ang[1], ang[2]));
+            double hi = Math.Max(ang[0], Math.Max(ang[1], ang[2]));
+            minA = Math.Min(minA, lo);
+            maxA = Math.Max(maxA, hi);
+            if (lo < boundDegrees) below++;
+            for (int k = 0; k < 3; k++) hist[Math.Clamp((int)(ang[k] / 10), 0, 17)]++;
+        }
+        if (mesh.TriangleCount == 0) minA = maxA = 0;
+        return new MeshQuality(mesh.TriangleCount, mesh.VertexCount, minA, maxA, hist, below);
+    }
+
+    /// <summary>The three angles of triangle t, degrees (angle k at vertex k).</summary>
+    /// <param name="mesh">The mesh.</param>
+    /// <param name="t">Triangle index.</param>
+    /// <param name="angles">Receives three angles.</param>
+    public static void TriangleAngles(TriangleMesh mesh, int t, Span<double> angles)
+    {
+        ArgumentNullException.ThrowIfNull(mesh);
+        for (int k = 0; k < 3; k++)
+        {
+            int a = mesh.Triangles[3 * t + k], b = mesh.Triangles[3 * t + (k + 1) % 3], c = mesh.Triangles[3 * t + (k + 2) % 3];
+            double ux = mesh.X[b] - mesh.X[a], uy = mesh.Y[b] - mesh.Y[a];
+            double vx = mesh.X[c] - mesh.X[a], vy = mesh.Y[c] - mesh.Y[a];
+            angles[k] = Math.Atan2(Math.Abs(ux * vy - uy * vx), ux * vx + uy * vy) * (180 / Math.PI);
+        }
+    }
+}
