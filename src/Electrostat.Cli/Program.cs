@@ -3,9 +3,5 @@ namespace Electrostat.Cli;
 /// <summary>Entry point of the <c>electrostat</c> command.</summary>
 internal static class Program
 {
-    private static int Main(string[] args)
-    {
-        Console.Error.WriteLine("usage: electrostat <command> ...");
-        return 2;
-    }
+    private static int Main(string[] args) => CommandRunner.Run(args, Console.Out, Console.Error);
 }

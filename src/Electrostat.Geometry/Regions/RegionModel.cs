@@ -22,7 +22,7 @@ public sealed class RegionModel
         var enclosure = NtsShapes.ToPolygon(design.Enclosure.Shape, ChordToleranceMetres);
         _conductors = design.Conductors.Select(c => NtsShapes.ToPolygon(c.Shape, ChordToleranceMetres)).ToArray();
         NetTopologySuite.Geometries.Geometry domain = enclosure;
-        foreach (var c in _conductors) domain = OverlayNGRobust.Overlay(domain, c, SpatialFunction.Difference);
+        foreach (var c in _conductors) domain = Op(domain, c, SpatialFunction.Difference);
         DomainAreaSquareMetres = domain.Area;
 
         // Later dielectrics win: walk from last to first, removing what later ones already claimed.
@@ -31,10 +31,10 @@ public sealed class RegionModel
         for (int j = design.Dielectrics.Count - 1; j >= 0; j--)
         {
             var poly = NtsShapes.ToPolygon(design.Dielectrics[j].Shape, ChordToleranceMetres);
-            var inDomain = OverlayNGRobust.Overlay(poly, domain, SpatialFunction.Intersection);
-            var own = OverlayNGRobust.Overlay(inDomain, claimed, SpatialFunction.Difference);
+            var inDomain = Op(poly, domain, SpatialFunction.Intersection);
+            var own = Op(inDomain, claimed, SpatialFunction.Difference);
             visible[j] = own.Area;
-            claimed = OverlayNGRobust.Overlay(claimed, inDomain, SpatialFunction.Union);
+            claimed = Op(claimed, inDomain, SpatialFunction.Union);
         }
         DielectricAreasSquareMetres = visible;
         BackgroundAreaSquareMetres = Math.Max(0, DomainAreaSquareMetres - claimed.Area);
@@ -45,6 +45,21 @@ public sealed class RegionModel
         for (int j = 0; j < visible.Length; j++) Add(design.Dielectrics[j].Material.Name, visible[j]);
         MaterialAreasSquareMetres = byMaterial;
         ConductorAreasSquareMetres = design.Conductors.Select(c => c.Shape.Area).ToArray();
+    }
+
+    /// <summary>A boolean operation keeping only the areal part (touching bodies can leave lines and points behind).</summary>
+    private static NetTopologySuite.Geometries.Geometry Op(NetTopologySuite.Geometries.Geometry a, NetTopologySuite.Geometries.Geometry b, SpatialFunction f)
+    {
+        var r = OverlayNGRobust.Overlay(a, b, f);
+        if (r is Polygon or MultiPolygon) return r;
+        var polys = new List<Polygon>();
+        for (int i = 0; i < r.NumGeometries; i++)
+        {
+            var g = r.GetGeometryN(i);
+            if (g is Polygon p) polys.Add(p);
+            else if (g is MultiPolygon mp) polys.AddRange(mp.Geometries.Cast<Polygon>());
+        }
+        return NtsShapes.Factory.CreateMultiPolygon(polys.ToArray());
     }
 
     /// <summary>Chord tolerance used to flatten arcs for these computations, metres.</summary>

@@ -1,0 +1,87 @@
+using Electrostat.Cli.Commands;
+
+namespace Electrostat.Cli;
+
+/// <summary>Dispatches <c>electrostat &lt;command&gt; ...</c> to a command class; the only place that catches everything.</summary>
+internal static class CommandRunner
+{
+    /// <summary>Every command, in the order shown by <c>electrostat help</c>.</summary>
+    public static IReadOnlyList<ICommand> Commands { get; } = [new CheckCommand()];
+
+    /// <summary>Runs the command line; never throws, never prints a stack trace.</summary>
+    public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr)
+    {
+        ArgumentNullException.ThrowIfNull(args);
+        if (args.Count == 0 || args[0] is "help" or "--help" or "-h")
+        {
+            if (args.Count > 1 && Find(args[1]) is { } c)
+            {
+                stdout.WriteLine(c.Usage);
+                return ExitCodes.Ok;
+            }
+            PrintCommandList(args.Count == 0 ? stderr : stdout);
+            return args.Count == 0 ? ExitCodes.InputError : ExitCodes.Ok;
+        }
+        if (args[0] == "--version")
+        {
+            stdout.WriteLine("electrostat " + typeof(CommandRunner).Assembly.GetName().Version?.ToString(3));
+            return ExitCodes.Ok;
+        }
+        var command = Find(args[0]);
+        if (command is null)
+        {
+            string? near = Commands.Select(c => c.Name).OrderBy(n => Distance(n, args[0])).FirstOrDefault(n => Distance(n, args[0]) <= 2);
+            stderr.WriteLine($"electrostat: unknown command \"{args[0]}\"" + (near is null ? "" : $"; did you mean \"{near}\"?"));
+            PrintCommandList(stderr);
+            return ExitCodes.InputError;
+        }
+        var rest = args.Skip(1).ToList();
+        if (rest.Contains("--help") || rest.Contains("-h"))
+        {
+            stdout.WriteLine(command.Usage);
+            return ExitCodes.Ok;
+        }
+        try
+        {
+            var parsed = ParsedArguments.Parse(rest, command.Options);
+            return command.Run(parsed, stdout, stderr);
+        }
+        catch (UsageException e)
+        {
+            stderr.WriteLine($"electrostat {command.Name}: {e.Message}");
+            stderr.WriteLine(command.Usage);
+            return ExitCodes.InputError;
+        }
+#pragma warning disable CA1031 // The top level must turn any failure into one clear line instead of a stack trace.
+        catch (Exception e)
+#pragma warning restore CA1031
+        {
+            stderr.WriteLine($"electrostat {command.Name}: internal error ({e.GetType().Name}: {e.Message}).");
+            stderr.WriteLine("This is a bug in electrostat, not in your design; please report it with the design file.");
+            return ExitCodes.InternalError;
+        }
+    }
+
+    private static ICommand? Find(string name) => Commands.FirstOrDefault(c => c.Name == name);
+
+    private static void PrintCommandList(TextWriter w)
+    {
+        w.WriteLine("usage: electrostat <command> [options]");
+        w.WriteLine();
+        w.WriteLine("commands:");
+        foreach (var c in Commands) w.WriteLine($"  {c.Name,-10} {c.Summary}");
+        w.WriteLine();
+        w.WriteLine("Run 'electrostat <command> --help' for the options of a command.");
+    }
+
+    private static int Distance(string a, string b)
+    {
+        var d = new int[a.Length + 1, b.Length + 1];
+        for (int i = 0; i <= a.Length; i++) d[i, 0] = i;
+        for (int j = 0; j <= b.Length; j++) d[0, j] = j;
+        for (int i = 1; i <= a.Length; i++)
+            for (int j = 1; j <= b.Length; j++)
+                d[i, j] = Math.Min(Math.Min(d[i - 1, j] + 1, d[i, j - 1] + 1), d[i - 1, j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1));
+        return d[a.Length, b.Length];
+    }
+}
