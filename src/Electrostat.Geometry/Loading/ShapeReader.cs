@@ -280,18 +280,18 @@ internal sealed class ShapeReader(ReadContext ctx)
     private bool CheckOutline(Contour contour, JObject obj, string what)
     {
         double diag = contour.Bounds.Diagonal;
-        if (contour.Area <= 1e-9 * diag * diag)
-        {
-            Sink.Error(obj, $"{what} encloses zero area", "spread the points so the outline encloses a region",
-                new Point2(contour.Bounds.MinX, contour.Bounds.MinY));
-            return false;
-        }
         var ring = NtsShapes.ToRing(contour, 1e-7 * diag);
         var bad = IsSimpleOp.GetNonSimpleLocation(ring);
         if (bad is not null)
         {
             Sink.Error(obj, $"{what} outline crosses itself", "reorder or move the points so the outline does not cross itself",
                 NtsShapes.ToPoint(bad));
+            return false;
+        }
+        if (contour.Area <= 1e-9 * diag * diag)
+        {
+            Sink.Error(obj, $"{what} encloses zero area", "spread the points so the outline encloses a region",
+                new Point2(contour.Bounds.MinX, contour.Bounds.MinY));
             return false;
         }
         return true;

@@ -66,6 +66,9 @@ public static class ShapeFactory
                 throw new GeometryException($"points {i} and {(i + 1) % n} coincide", (i + 1) % n, next, "remove the repeated point");
         }
 
+        if (AllCollinear(vertices))
+            throw new GeometryException("the polygon encloses zero area: all its points lie on one line", 0, vertices[0].Point, "spread the points so the outline encloses a region");
+
         // Tangent distance d and fillet arc at each corner.
         var d = new double[n];
         var arcs = new ArcSegment?[n];
@@ -134,6 +137,16 @@ public static class ShapeFactory
 
         // Snap joints so consecutive segments share exact end points (fillet end points come from trigonometry).
         return new Contour(Snap(segments));
+    }
+
+    private static bool AllCollinear(IReadOnlyList<PolygonVertex> v)
+    {
+        var p0 = v[0].Point;
+        var far = v.MaxBy(q => q.Point.DistanceTo(p0)).Point;
+        var axis = far - p0;
+        double len = axis.Length;
+        if (len == 0) return true;
+        return v.All(q => Math.Abs(Point2.Cross(axis, q.Point - p0)) / len <= 1e-12 * len);
     }
 
     /// <summary>Replaces each line's end points by the exact ends of neighbouring arcs, so joints coincide bit for bit.</summary>

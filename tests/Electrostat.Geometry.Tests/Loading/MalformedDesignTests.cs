@@ -1,0 +1,124 @@
+using Electrostat.Geometry.Loading;
+
+namespace Electrostat.Geometry.Tests.Loading;
+
+/// <summary>The table of malformed inputs: one case per validation rule, each asserting message and location.</summary>
+public class MalformedDesignTests
+{
+    /// <summary>One malformed input.</summary>
+    /// <param name="Edits">Replacements applied to <see cref="DesignTexts.Base"/>.</param>
+    /// <param name="Message">Text the problem's message (or fix hint) must contain.</param>
+    /// <param name="Needle">Text whose first occurrence in the edited file is where the problem must be located
+    /// (line always; column too when <paramref name="CheckColumn"/>), or null for no file location.</param>
+    /// <param name="CheckColumn">Whether the column must match the needle exactly.</param>
+    /// <param name="Severity">Expected severity.</param>
+    public sealed record Case((string Old, string New)[] Edits, string Message, string? Needle, bool CheckColumn, ProblemSeverity Severity = ProblemSeverity.Error);
+
+    public static readonly Dictionary<string, Case> Cases = new()
+    {
+        ["json-syntax"] = new([("\"symmetry\": \"planar\",", "\"symmetry\": \"planar\"")], "JSON syntax error", "\"parameters\"", false),
+        ["unknown-key"] = new([("\"potential\": \"10 kV\"", "\"potental\": \"10 kV\"")], "did you mean 'potential'?", "\"potental\"", true),
+        ["unknown-top-key"] = new([("\"background\":", "\"backgroud\":")], "unknown key \"backgroud\"", "\"backgroud\"", true),
+        ["missing-key"] = new([("  \"units\": \"mm\",\n", "")], "missing key \"units\"", "{", true),
+        ["missing-shape"] = new([(", \"shape\": { \"type\": \"circle\", \"center\": [0, 10], \"radius\": 5 }", "")], "missing key \"shape\" in conductor \"hv\"", "{ \"name\": \"hv\"", true),
+        ["wrong-type"] = new([("\"radius\": 5", "\"radius\": [5]")], "radius must be a number or a quantity string", "[5]", true),
+        ["wrong-type-name"] = new([("\"name\": \"gnd\"", "\"name\": 7")], "name must be a string", "7,", true),
+        ["bad-unit"] = new([("\"10 kV\"", "\"10 kW\"")], "unknown unit \"kW\"", "kW", true),
+        ["unit-of-wrong-kind"] = new([("\"radius\": 5", "\"radius\": \"5 kV\"")], "\"kV\" is a potential unit", "kV\" } }", true),
+        ["bad-design-units"] = new([("\"units\": \"mm\"", "\"units\": \"mmm\"")], "did you mean 'mm'?", "\"mmm\"", true),
+        ["unknown-parameter"] = new([("\"center\": [0, 10]", "\"center\": [0, \"gapp + 5\"]")], "unknown parameter 'gapp'", "gapp", true),
+        ["division-by-zero"] = new([("\"center\": [0, 10]", "\"center\": [0, \"10/(gap-5)\"]")], "division by zero", "/(gap", true),
+        ["circular-parameter"] = new([("\"gap\": 5", "\"gap\": \"2*other\", \"other\": \"gap + 1\"")], "depends on itself", null, false),
+        ["nan"] = new([("\"radius\": 5", "\"radius\": NaN")], "not a finite number", "NaN", false),
+        ["absurd-magnitude"] = new([("\"radius\": 5", "\"radius\": 5e9")], "implausibly large", "5e9", false),
+        ["absurd-small"] = new([("\"radius\": 5", "\"radius\": \"1e-6 um\"")], "implausibly small", "\"1e-6 um\"", true),
+        ["polygon-two-points"] = new([("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"polygon\", \"points\": [[-30, 20], [30, 20]] }")], "at least 3 points", "[[-30, 20], [30, 20]]", true),
+        ["polygon-zero-area"] = new([("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"polygon\", \"points\": [[-30, 20], [0, 20], [30, 20]] }")], "encloses zero area", "[-30, 20], [0", true),
+        ["self-intersecting"] = new([("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"polygon\", \"points\": [[-30, 20], [30, 30], [30, 20], [-10, 30]] }")], "crosses itself", "{ \"type\": \"polygon\"", true),
+        ["fillet-too-large"] = new([("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"polygon\", \"points\": [{ \"at\": [-30, 20], \"fillet\": 12 }, [30, 20], [30, 30], [-30, 30]] }")], "reduce the fillet radius at point 0 to at most 10 mm", "{ \"at\"", true),
+        ["corner-radius-too-large"] = new([("\"max\": [30, 30] }", "\"max\": [30, 30], \"corner_radius\": 6 }")], "at most 5 mm", "\"corner_radius\"", false),
+        ["duplicate-name"] = new([("\"name\": \"gnd\"", "\"name\": \"hv\"")], "duplicate conductor name \"hv\"", "\"hv\", \"potential\": 0", true),
+        ["unknown-material"] = new([("\"material\": \"oil\"", "\"material\": \"oill\"")], "did you mean 'oil'?", "\"oill\"", true),
+        ["unknown-background"] = new([("\"background\": \"oil\"", "\"background\": \"air\"")], "unknown material \"air\" for the background", "\"air\"", true),
+        ["zero-permittivity"] = new([("\"relative_permittivity\": 2.2", "\"relative_permittivity\": 0")], "relative_permittivity must be greater than zero", "0, \"breakdown", true),
+        ["negative-breakdown"] = new([("\"10 kV/mm\"", "\"-1 kV/mm\"")], "breakdown_field must be greater than zero", "\"-1 kV/mm\"", true),
+        ["short-circuit-overlap"] = new([("\"max\": [20, 0]", "\"max\": [20, 6]")], "short circuit: conductors \"hv\" (10 kV) and \"gnd\" (0 V) overlap", "{ \"name\": \"gnd\"", true),
+        ["short-circuit-touch"] = new([("\"max\": [20, 0]", "\"max\": [20, 5]")], "short circuit: conductors \"hv\" (10 kV) and \"gnd\" (0 V) touch", "{ \"name\": \"gnd\"", true),
+        ["touches-enclosure"] = new([("\"center\": [0, 10]", "\"center\": [0, 45]")], "touches the enclosure", "{ \"name\": \"hv\"", true),
+        ["conductor-outside"] = new([("\"center\": [0, 10]", "\"center\": [0, 70]")], "conductor \"hv\" lies (partly) outside the enclosure", "{ \"type\": \"circle\"", true),
+        ["dielectric-outside"] = new([("\"max\": [30, 30]", "\"max\": [30, 60]")], "dielectric \"block\" lies (partly) outside the enclosure", "{ \"type\": \"rectangle\", \"min\": [-30, 20]", true),
+        ["axisymmetric-negative-r"] = new([("\"planar\"", "\"axisymmetric\""), ("\"min\": [-50, -50]", "\"min\": [0, -50]")], "conductor \"gnd\" reaches r < 0", "{ \"type\": \"rectangle\", \"min\": [-20", true),
+        ["floating-touches-fixed"] = new([("\"potential\": \"10 kV\"", "\"floating\": true"), ("\"max\": [20, 0]", "\"max\": [20, 5]")], "floating conductor \"hv\" and fixed conductor \"gnd\" touch", "{ \"name\": \"gnd\"", true),
+        ["no-potential-difference"] = new([("\"potential\": \"10 kV\"", "\"potential\": 0")], "no potential difference", null, false, ProblemSeverity.Warning),
+        ["partial-dielectric-overlap"] = new([("\"max\": [30, 30] } }", "\"max\": [30, 30] } },\n    { \"name\": \"slab\", \"material\": \"oil\", \"shape\": { \"type\": \"rectangle\", \"min\": [20, 25], \"max\": [40, 40] } }")], "dielectrics \"block\" and \"slab\" partly overlap", "{ \"name\": \"slab\"", true, ProblemSeverity.Warning),
+        ["unknown-shape-type"] = new([("\"type\": \"circle\"", "\"type\": \"circel\"")], "did you mean 'circle'?", "\"circel\"", true),
+        ["potential-and-floating"] = new([("\"potential\": \"10 kV\"", "\"potential\": \"10 kV\", \"floating\": true")], "has both \"potential\" and \"floating\"", null, false),
+        ["charge-on-fixed"] = new([("\"potential\": \"10 kV\"", "\"potential\": \"10 kV\", \"charge\": \"1 nC\"")], "\"charge\" is only allowed on a floating conductor", null, false),
+        ["symmetry-plane-off-edge"] = new([("\"potential\": 0 }", "\"potential\": 0, \"symmetry_planes\": [{ \"x\": 10 }] }")], "no straight enclosure edge lies on x = 10 mm", "{ \"x\": 10 }", true),
+        ["hole-outside"] = new([("\"max\": [30, 30] }", "\"max\": [30, 30], \"holes\": [{ \"type\": \"circle\", \"center\": [40, 25], \"radius\": 2 }] }")], "hole 0 of dielectric \"block\" is not inside its outline", "{ \"type\": \"circle\", \"center\": [40", true),
+        ["depth-in-axisymmetric"] = new([("\"planar\",", "\"axisymmetric\", \"depth\": 10,")], "\"depth\" applies to planar designs only", "\"depth\"", true),
+        ["reserved-parameter"] = new([("\"gap\": 5", "\"mm\": 5")], "parameter name \"mm\" is reserved", "\"mm\": 5", true),
+        ["no-conductors"] = new([("\"conductors\": [", "\"conductors\": [], \"unused\": [")], "unknown key \"unused\"", "\"unused\"", true),
+    };
+
+    public static TheoryData<string> CaseNames() => new(Cases.Keys);
+
+    [Theory]
+    [MemberData(nameof(CaseNames))]
+    public void MalformedInput_IsReportedWithMessageAndLocation(string name)
+    {
+        var c = Cases[name];
+        string text = DesignTexts.With(c.Edits);
+        var result = DesignLoader.LoadFromText(text, "case.json");
+        var matches = result.Problems.Where(p => p.Severity == c.Severity &&
+            (p.Message.Contains(c.Message, StringComparison.Ordinal) || (p.Hint ?? "").Contains(c.Message, StringComparison.Ordinal))).ToList();
+        Assert.True(matches.Count > 0, $"no {c.Severity} containing \"{c.Message}\"; got:\n" + string.Join("\n", result.Problems));
+        var p = matches[0];
+        Assert.Equal("case.json", p.Source);
+        Assert.StartsWith("$", p.JsonPath, StringComparison.Ordinal);
+        if (c.Needle is not null)
+        {
+            var (line, col) = DesignTexts.Find(text, c.Needle);
+            Assert.True(line == p.Line, $"expected line {line}, got {p}");
+            if (c.CheckColumn) Assert.True(col == p.Column, $"expected column {col}, got {p}");
+        }
+        if (c.Severity == ProblemSeverity.Error) Assert.Null(result.Design);
+        else Assert.NotNull(result.Design);
+    }
+
+    [Fact]
+    public void BaseDesign_IsValidWithoutProblemsOtherThanNone()
+    {
+        var result = DesignLoader.LoadFromText(DesignTexts.Base, "base.json");
+        Assert.False(result.HasErrors, string.Join("\n", result.Problems));
+        Assert.Empty(result.Problems);
+    }
+
+    [Fact]
+    public void SeveralProblems_AreAllReportedTogether()
+    {
+        string text = DesignTexts.With(("\"10 kV\"", "\"10 kW\""), ("\"material\": \"oil\"", "\"material\": \"oill\""), ("\"radius\": 5", "\"radius\": -5"));
+        var result = DesignLoader.LoadFromText(text, "many.json");
+        Assert.True(result.Errors.Count() >= 3, string.Join("\n", result.Problems));
+    }
+
+    [Fact]
+    public void GeometricProblem_CarriesCoordinate()
+    {
+        string text = DesignTexts.With(("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"polygon\", \"points\": [[-30, 20], [30, 30], [30, 20], [-10, 30]] }"));
+        var p = DesignLoader.LoadFromText(text).Errors.Single(e => e.Message.Contains("crosses itself", StringComparison.Ordinal));
+        // Edges (-30,20)-(30,30) and (30,20)-(-10,30) cross where 20 + (x+30)/6 = 20 + (30-x)/4, at (6, 26) mm.
+        Assert.NotNull(p.Coordinate);
+        Assert.Equal(0.006, p.Coordinate!.Value.X, 1e-9);
+        Assert.Equal(0.026, p.Coordinate.Value.Y, 1e-9);
+        Assert.Contains("near (6 mm, 26 mm)", p.ToString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void MissingFile_IsOneClearProblem()
+    {
+        var result = DesignLoader.Load(Path.Combine(Path.GetTempPath(), "no-such-design-9f3a.json"));
+        var p = Assert.Single(result.Problems);
+        Assert.Contains("cannot read the design file", p.Message, StringComparison.Ordinal);
+    }
+}
