@@ -1,0 +1,146 @@
+using Electrostat.Geometry.Loading;
+using Electrostat.Geometry.Model;
+using Electrostat.Geometry.Shapes;
+
+namespace Electrostat.Geometry.Tests.Loading;
+
+public class DesignLoaderTests
+{
+    private static Design Valid(string text, IReadOnlyDictionary<string, string>? overrides = null)
+    {
+        var result = DesignLoader.LoadFromText(text, "t.json", overrides);
+        Assert.False(result.HasErrors, string.Join("\n", result.Problems));
+        return result.Design!;
+    }
+
+    [Fact]
+    public void Override_ReplacesParameterAndMovesGeometry()
+    {
+        string text = DesignTexts.With(("\"center\": [0, 10]", "\"center\": [0, \"gap + 5\"]"));
+        var d = Valid(text, new Dictionary<string, string> { ["gap"] = "8" });
+        Assert.Equal(8, d.Parameters["gap"]);
+        Assert.Equal(13e-3 - 5e-3, d.Conductors[0].Shape.Bounds.MinY, 1e-15);
+        var withUnit = Valid(text, new Dictionary<string, string> { ["gap"] = "0.8 cm" });
+        Assert.Equal(8, withUnit.Parameters["gap"], 1e-12);
+    }
+
+    [Fact]
+    public void NumericOverride_IsInDefaultUnits()
+    {
+        string path = Path.Combine(Path.GetTempPath(), $"electrostat-override-{Guid.NewGuid():N}.json");
+        File.WriteAllText(path, DesignTexts.With(("\"center\": [0, 10]", "\"center\": [0, \"gap + 5\"]")));
+        try
+        {
+            var result = DesignLoader.Load(path, new Dictionary<string, double> { ["gap"] = 7.5 });
+            Assert.False(result.HasErrors, string.Join("\n", result.Problems));
+            Assert.Equal(7.5, result.Design!.Parameters["gap"]);
+            Assert.Equal(Path.GetFullPath(path), result.Design.SourcePath);
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+    }
+
+    [Fact]
+    public void Override_OfUnknownParameter_SuggestsName()
+    {
+        var result = DesignLoader.LoadFromText(DesignTexts.Base, "t.json", new Dictionary<string, string> { ["gapp"] = "3" });
+        var p = Assert.Single(result.Errors);
+        Assert.Equal("--set", p.Source);
+        Assert.Contains("did you mean 'gap'?", p.Hint, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void ParameterWithUnit_IsConvertedToDesignUnits()
+    {
+        // 25.4 mm is exactly 1 in (NIST SP 811, appendix B), so in an inch design gap = 1.
+        string text = DesignTexts.With(("\"units\": \"mm\"", "\"units\": \"in\""), ("\"gap\": 5", "\"gap\": \"25.4 mm\""),
+            ("\"min\": [-50, -50], \"max\": [50, 50]", "\"min\": [-5, -5], \"max\": [5, 5]"),
+            ("\"center\": [0, 10], \"radius\": 5", "\"center\": [0, \"gap + 1\"], \"radius\": 0.5"),
+            ("\"min\": [-20, -10], \"max\": [20, 0]", "\"min\": [-2, -1], \"max\": [2, 0]"),
+            ("\"min\": [-30, 20], \"max\": [30, 30]", "\"min\": [-3, 3], \"max\": [3, 4]"));
+        var d = Valid(text);
+        Assert.Equal(1.0, d.Parameters["gap"], 1e-12);
+        Assert.Equal(2 * 0.0254, d.Conductors[0].Shape.Bounds.MaxY - 0.5 * 0.0254, 1e-12);
+        Assert.Equal(1.0, d.DepthMetres); // default depth: per-metre values equal totals
+    }
+
+    [Fact]
+    public void TouchingConductorsAtSamePotential_AreMergedWithNote()
+    {
+        string text = DesignTexts.With(("\"potential\": \"10 kV\"", "\"potential\": 0"), ("\"max\": [20, 0]", "\"max\": [20, 5]"),
+            ("\"enclosure\": { \"shape\"", "\"enclosure\": { \"potential\": \"1 kV\", \"shape\""), (", \"potential\": 0 },\n  \"conductors\"", " },\n  \"conductors\""));
+        var result = DesignLoader.LoadFromText(text);
+        Assert.False(result.HasErrors, string.Join("\n", result.Problems));
+        var d = result.Design!;
+        Assert.Single(d.Electrodes);
+        Assert.Equal("hv+gnd", d.Electrodes[0].Name);
+        Assert.Equal(0, d.Conductors[1].ElectrodeIndex);
+        Assert.Contains(result.Problems, p => p.Severity == ProblemSeverity.Note && p.Message.Contains("merged into one electrode", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ShorthandBox_SurroundsBodiesWithMargin()
+    {
+        string text = DesignTexts.With(("\"shape\": { \"type\": \"rectangle\", \"min\": [-50, -50], \"max\": [50, 50] }, \"potential\": 0", "\"margin\": 10"));
+        var d = Valid(text);
+        Assert.True(d.Enclosure.IsShorthandBox);
+        // Bodies span x in [-30, 30] mm and y in [-10, 30] mm.
+        Assert.Equal(new BoundingBox(-40e-3, -20e-3, 40e-3, 40e-3), d.Bounds);
+    }
+
+    [Fact]
+    public void AxisymmetricShorthandBox_StartsOnAxisAndMarksIt()
+    {
+        string text = DesignTexts.With(("\"planar\"", "\"axisymmetric\""),
+            ("\"shape\": { \"type\": \"rectangle\", \"min\": [-50, -50], \"max\": [50, 50] }, \"potential\": 0", "\"margin\": 10"),
+            ("\"min\": [-20, -10], \"max\": [20, 0]", "\"min\": [0, -10], \"max\": [20, 0]"),
+            ("\"min\": [-30, 20], \"max\": [30, 30]", "\"min\": [0, 20], \"max\": [30, 30]"),
+            ("\"center\": [0, 10]", "\"center\": [8, 10]"));
+        var d = Valid(text);
+        Assert.Equal(0, d.Bounds.MinX);
+        Assert.Single(d.Enclosure.Shape.Outer.Segments, s => s.Marker == BoundaryMarker.Axis);
+    }
+
+    [Fact]
+    public void SymmetryPlane_MarksMatchingEnclosureEdge()
+    {
+        string text = DesignTexts.With(("\"min\": [-50, -50], \"max\": [50, 50] }, \"potential\": 0", "\"min\": [-50, -50], \"max\": [50, 50] }, \"potential\": 0, \"symmetry_planes\": [{ \"y\": -50 }]"));
+        var d = Valid(text);
+        var marked = Assert.Single(d.Enclosure.Shape.Outer.Segments, s => s.Marker == BoundaryMarker.SymmetryPlane);
+        Assert.Equal(-0.05, marked.Start.Y, 1e-15);
+        Assert.Equal(-0.05, marked.End.Y, 1e-15);
+    }
+
+    [Fact]
+    public void FloatingConductor_TakesChargePerMetreInPlanar()
+    {
+        string text = DesignTexts.With(("\"potential\": \"10 kV\"", "\"floating\": true, \"charge\": \"2 nC/m\""),
+            ("\"name\": \"gnd\", \"potential\": 0", "\"name\": \"gnd\", \"potential\": \"1 kV\""));
+        var d = Valid(text);
+        Assert.True(d.Conductors[0].IsFloating);
+        Assert.Equal(2e-9, d.Conductors[0].ChargeCoulombs!.Value, 1e-21);
+        Assert.True(d.Electrodes[0].IsFloating);
+    }
+
+    [Fact]
+    public void PathShape_WithArcsAndHoles_HasExactArea()
+    {
+        // Half disc of radius 10 mm (path: diameter + 180° arc) with a 2 mm circular hole: π·100/2 − π·4 mm².
+        string text = DesignTexts.With(("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }",
+            "{ \"type\": \"path\", \"start\": [-10, 20], \"segments\": [ { \"line_to\": [10, 20] }, { \"arc_to\": [-10, 20], \"center\": [0, 20] } ], \"holes\": [ { \"type\": \"circle\", \"center\": [0, 25], \"radius\": 2 } ] }"));
+        var d = Valid(text);
+        var shape = d.Dielectrics[0].Shape;
+        Assert.Equal((Math.PI * 100 / 2 - Math.PI * 4) * 1e-6, shape.Area, 1e-15);
+        Assert.Equal(RegionKind.Background, d.Classify(0, 25e-3).Kind); // inside the hole
+        Assert.Equal(RegionKind.Dielectric, d.Classify(0, 29.9e-3).Kind);
+    }
+
+    [Fact]
+    public void Comments_AreAllowed()
+    {
+        var d = Valid("// header\n" + DesignTexts.Base.Replace("\"units\": \"mm\",", "\"units\": \"mm\", /* inline */", StringComparison.Ordinal));
+        Assert.Equal("mm", d.Units.Symbol);
+    }
+}
