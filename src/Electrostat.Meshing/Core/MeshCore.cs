@@ -292,7 +292,9 @@ internal sealed partial class MeshCore
             TSkip[t] = 0;
             _scrU[u] = t;
             _scrV[v] = t;
+            // Both ends: on a one-sided (boundary) split the boundary is a path, and its last vertex is no edge's start.
             VTri[u] = t;
+            VTri[v] = t;
         }
         for (int j = 0; j < _nb; j++)
         {
@@ -346,6 +348,7 @@ internal sealed partial class MeshCore
         int start = VTri[u];
         int t = start;
         int guard = 0;
+        Debug.Assert(TV[3 * t] == u || TV[3 * t + 1] == u || TV[3 * t + 2] == u, "VTri must point to a triangle that has the vertex.");
         // Rotate counter-clockwise about u; on reaching a boundary, rotate the other way from the start.
         while (true)
         {
