@@ -163,9 +163,16 @@ internal sealed class CompiledProblem
         var rho = new List<double>();
         var regions = new List<int>();
         var m = Mesh;
+        int lastRegion = 0, lastIndex = -1;
         for (int t = 0; t < m.TriangleCount; t++)
         {
             int region = m.TriangleRegion[t];
+            // Neighbouring triangles usually share a region: skip the dictionary for runs.
+            if (lastIndex >= 0 && region == lastRegion)
+            {
+                TriangleMaterial[t] = lastIndex;
+                continue;
+            }
             if (!index.TryGetValue(region, out int k))
             {
                 if (!Problem.Materials.TryGetValue(region, out var mat) || mat is null)
@@ -191,6 +198,8 @@ internal sealed class CompiledProblem
                 HasCharge |= mat.ChargeDensityCoulombsPerCubicMetre != 0;
             }
             TriangleMaterial[t] = k;
+            lastRegion = region;
+            lastIndex = k;
         }
         MaterialEpsilon = [.. eps];
         MaterialCharge = [.. rho];

@@ -1,7 +1,6 @@
 using System.Diagnostics;
 using Electrostat.Fem.Assembly;
 using Electrostat.Fem.Capacitance;
-using Electrostat.Fem.Elements;
 using Electrostat.Fem.Problem;
 
 namespace Electrostat.Fem.Solving;
@@ -100,8 +99,9 @@ public sealed class FieldSolver
             double v = def.IsFloating ? phi[FirstNodeOf(c)] : def.PotentialVolts;
             conductors[c] = new ConductorResult(def.Name, def.IsFloating, v, q[c], 0.5 * q[c] * v);
         }
-        var (ex, ey) = Fields(phi);
-        double energy = SystemAssembler.Energy(_cp, phi);
+        var ex = new double[mesh.TriangleCount];
+        var ey = new double[mesh.TriangleCount];
+        double energy = SystemAssembler.Energy(_cp, phi, ex, ey);
         report = report with { SolveSeconds = report.SolveSeconds + sw.Elapsed.TotalSeconds };
         return new FieldSolution(_cp.Problem, phi, ex, ey, conductors, q[_cp.EnclosureTerminal], q[_cp.InfinityTerminal], energy, report);
     }
@@ -120,26 +120,5 @@ public sealed class FieldSolver
             if (t[i] == conductor) return i;
         }
         throw new UnreachableException("every conductor has a vertex (checked on compile)");
-    }
-
-    private (double[] Ex, double[] Ey) Fields(double[] phi)
-    {
-        var mesh = _cp.Mesh;
-        var ex = new double[mesh.TriangleCount];
-        var ey = new double[mesh.TriangleCount];
-        var tri = mesh.Triangles;
-        var x = mesh.X;
-        var y = mesh.Y;
-        Parallel.For(0, Math.Min(Environment.ProcessorCount, Math.Max(1, mesh.TriangleCount / 50_000)), p =>
-        {
-            int parts = Math.Min(Environment.ProcessorCount, Math.Max(1, mesh.TriangleCount / 50_000));
-            int start = (int)((long)mesh.TriangleCount * p / parts), end = (int)((long)mesh.TriangleCount * (p + 1) / parts);
-            for (int t = start; t < end; t++)
-            {
-                int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
-                (ex[t], ey[t]) = P1Triangle.Field(x[a], y[a], x[b], y[b], x[c], y[c], phi[a], phi[b], phi[c]);
-            }
-        });
-        return (ex, ey);
     }
 }

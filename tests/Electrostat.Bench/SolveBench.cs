@@ -1,0 +1,109 @@
+using System.Diagnostics;
+using System.Globalization;
+using Electrostat.Fem.Problem;
+using Electrostat.Fem.Solving;
+
+namespace Electrostat.Bench;
+
+/// <summary>
+/// Suite "solve": the whole FEM chain on a planar two-conductor, two-dielectric design (see
+/// <see cref="SolveBenchProblem"/>). Per case, <c>seconds</c> is validation + assembly + AMG setup + the first solve
+/// (to 1e-10 relative residual) including its post-processing (charges, field, energy): the wall time of
+/// <c>new FieldSolver(p).Solve()</c>. <c>extra_rhs_seconds</c> is the cost of one more right-hand side on the same
+/// matrix and hierarchy: the capacitance-matrix time divided by its two columns. Medians over the repeats.
+/// <c>peak_mb</c> is the process's peak resident set (VmHWM) during the case, reset before it via /proc/self/clear_refs.
+/// Options: <c>--cells 125,250,500,1001</c>, <c>--repeat 5</c>.
+/// </summary>
+internal sealed class SolveBench : IBenchSuite
+{
+    public string Name => "solve";
+
+    public int Run(string[] args)
+    {
+        int[] cells = [125, 250, 500, 1001];
+        int repeat = 5;
+        for (int i = 0; i + 1 < args.Length; i += 2)
+        {
+            switch (args[i])
+            {
+                case "--cells":
+                    cells = args[i + 1].Split(',').Select(s => int.Parse(s, CultureInfo.InvariantCulture)).ToArray();
+                    break;
+                case "--repeat":
+                    repeat = int.Parse(args[i + 1], CultureInfo.InvariantCulture);
+                    break;
+                default:
+                    Console.Error.WriteLine($"solve: unknown option {args[i]}");
+                    return 2;
+            }
+        }
+        bool ok = true;
+        foreach (int m in cells)
+        {
+            var problem = SolveBenchProblem.Create(m);
+            GC.Collect();
+            ResetPeak();
+            var first = new List<double>();
+            var extra = new List<double>();
+            SolveReport? report = null;
+            double cap = 0;
+            for (int r = 0; r < repeat; r++)
+            {
+                GC.Collect();
+                var clock = Stopwatch.StartNew();
+                var solver = new FieldSolver(problem);
+                var sol = solver.Solve();
+                first.Add(clock.Elapsed.TotalSeconds);
+                clock.Restart();
+                var cm = solver.ComputeCapacitanceMatrix();
+                extra.Add(clock.Elapsed.TotalSeconds / cm.Count);
+                report = sol.Report;
+                cap = cm.Maxwell[0, 0];
+                ok &= sol.Report.Converged && cm.ColumnReports.All(c => c.Converged) && cm.PassesPhysicsChecks;
+            }
+            double peakMb = PeakMegabytes();
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"solve case=structured-two-plates-{m} unknowns={report!.Unknowns} iterations={report.Iterations} seconds={Median(first):F3} extra_rhs_seconds={Median(extra):F3} peak_mb={peakMb:F0} assembly_seconds={report.AssemblySeconds:F3} setup_seconds={report.PreconditionerSetupSeconds:F3} cg_seconds={report.SolveSeconds:F3} residual={report.RelativeResidual:E2} c11={cap:E6}"));
+        }
+        return ok ? 0 : 1;
+    }
+
+    private static void ResetPeak()
+    {
+        // Writing 5 to clear_refs resets the peak resident set size (Linux proc(5)); elsewhere the peak is cumulative.
+        try
+        {
+            File.WriteAllText("/proc/self/clear_refs", "5");
+        }
+        catch (IOException)
+        {
+        }
+        catch (UnauthorizedAccessException)
+        {
+        }
+    }
+
+    private static double PeakMegabytes()
+    {
+        try
+        {
+            foreach (var line in File.ReadLines("/proc/self/status"))
+            {
+                if (line.StartsWith("VmHWM:", StringComparison.Ordinal))
+                {
+                    return double.Parse(line[6..].Trim().Split(' ')[0], CultureInfo.InvariantCulture) / 1024.0;
+                }
+            }
+        }
+        catch (IOException)
+        {
+        }
+        return Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024.0);
+    }
+
+    private static double Median(List<double> values)
+    {
+        var s = values.Order().ToArray();
+        return s.Length % 2 == 1 ? s[s.Length / 2] : 0.5 * (s[s.Length / 2 - 1] + s[s.Length / 2]);
+    }
+}
