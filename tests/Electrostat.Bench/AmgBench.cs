@@ -10,7 +10,8 @@ namespace Electrostat.Bench;
 /// Suite "amg": the numerics layer alone on a generated P1 Laplace problem (see <see cref="AmgBenchProblem"/>).
 /// Per case: symbolic + numeric assembly, AMG setup, PCG to 1e-10 relative residual from zero, then one more
 /// right-hand side with the same hierarchy. Times are medians over the repeats.
-/// Options: <c>--cells 125,250,500,1001</c> (cells per side; unknowns = (cells − 1)²), <c>--repeat 5</c>.
+/// Options: <c>--cells 126,251,501,1001</c> (cells per side; unknowns = (cells − 1)²), <c>--repeat 5</c>, and the
+/// AMG settings <c>--theta</c>, <c>--sweeps</c>, <c>--power</c>, <c>--coarsest</c> (see <see cref="AmgOptions"/>).
 /// </summary>
 internal sealed class AmgBench : IBenchSuite
 {
@@ -20,12 +21,25 @@ internal sealed class AmgBench : IBenchSuite
     {
         int[] cells = [126, 251, 501, 1001];
         int repeat = 5;
+        var amgOptions = new AmgOptions();
         for (int i = 0; i + 1 < args.Length; i += 2)
         {
             switch (args[i])
             {
                 case "--cells":
                     cells = args[i + 1].Split(',').Select(s => int.Parse(s, CultureInfo.InvariantCulture)).ToArray();
+                    break;
+                case "--theta":
+                    amgOptions = amgOptions with { StrengthThreshold = double.Parse(args[i + 1], CultureInfo.InvariantCulture) };
+                    break;
+                case "--sweeps":
+                    amgOptions = amgOptions with { Sweeps = int.Parse(args[i + 1], CultureInfo.InvariantCulture) };
+                    break;
+                case "--power":
+                    amgOptions = amgOptions with { SpectralRadiusIterations = int.Parse(args[i + 1], CultureInfo.InvariantCulture) };
+                    break;
+                case "--coarsest":
+                    amgOptions = amgOptions with { CoarsestRows = int.Parse(args[i + 1], CultureInfo.InvariantCulture) };
                     break;
                 case "--repeat":
                     repeat = int.Parse(args[i + 1], CultureInfo.InvariantCulture);
@@ -61,7 +75,7 @@ internal sealed class AmgBench : IBenchSuite
                 var a = plan.Assemble(problem.ElementStiffness);
                 assembly.Add(clock.Elapsed.TotalSeconds);
                 clock.Restart();
-                var amg = SmoothedAggregationAmg.Build(a);
+                var amg = SmoothedAggregationAmg.Build(a, amgOptions);
                 setup.Add(clock.Elapsed.TotalSeconds);
                 var x = new double[problem.DofCount];
                 var report = ConjugateGradient.Solve(a, b1, x, amg, options);

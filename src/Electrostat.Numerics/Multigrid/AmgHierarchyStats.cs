@@ -12,7 +12,7 @@ public sealed record AmgHierarchyStats
     /// <summary>Σ rows(A_l) / rows(A_0).</summary>
     public double GridComplexity => Levels.Sum(l => (double)l.Rows) / Levels[0].Rows;
 
-    /// <summary>How the coarsest level is solved ("Cholesky" or "pseudo-inverse").</summary>
+    /// <summary>How the coarsest level is solved ("Cholesky", "pseudo-inverse", or relaxation sweeps if coarsening stalled).</summary>
     public required string CoarsestSolver { get; init; }
 
     /// <summary>Wall-clock setup time, seconds.</summary>

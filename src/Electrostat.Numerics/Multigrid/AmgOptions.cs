@@ -24,7 +24,7 @@ public sealed record AmgOptions
     /// <summary>
     /// Power iterations used to estimate ρ(D⁻¹A) for the prolongator damping; 0 uses the Gershgorin bound alone.
     /// </summary>
-    public int SpectralRadiusIterations { get; init; } = 8;
+    public int SpectralRadiusIterations { get; init; } = 6;
 
     /// <summary>Stop coarsening if a level keeps more than this fraction of its rows (aggregation stalled).</summary>
     public double MaxCoarseningRatio { get; init; } = 0.85;

@@ -23,6 +23,8 @@ internal sealed class HybridGaussSeidel
     private readonly RowPartition _blocks;
     private readonly double[] _inverseDiagonal;
     private readonly double[] _snapshot;
+    private readonly int[] _diagonalPosition;
+    private readonly bool[] _hasOffBlock;
 
     public HybridGaussSeidel(CsrMatrix a)
     {
@@ -31,6 +33,8 @@ internal sealed class HybridGaussSeidel
         _blocks = RowPartition.ByEntries(a.RowPointers, a.Rows, workers);
         _inverseDiagonal = new double[a.Rows];
         _snapshot = _blocks.Count > 1 ? new double[a.Rows] : [];
+        _diagonalPosition = new int[a.Rows];
+        _hasOffBlock = new bool[a.Rows];
         var rp = a.RowPointers; var ci = a.ColumnIndices; var v = a.Values;
         for (int blk = 0; blk < _blocks.Count; blk++)
         {
@@ -44,10 +48,12 @@ internal sealed class HybridGaussSeidel
                     if (j == i)
                     {
                         d += v[k];
+                        _diagonalPosition[i] = k;
                     }
                     else if ((uint)(j - s) >= (uint)(e - s))
                     {
                         offBlock += Math.Abs(v[k]);
+                        _hasOffBlock[i] = true;
                     }
                 }
                 if (!(d > 0))
@@ -105,17 +111,29 @@ internal sealed class HybridGaussSeidel
     private void ForwardFromZeroBlock(double[] b, double[] x, int s, int e)
     {
         var rp = _a.RowPointers; var ci = _a.ColumnIndices; var v = _a.Values; var dInv = _inverseDiagonal;
+        var dpos = _diagonalPosition; var offBlock = _hasOffBlock;
         for (int i = s; i < e; i++)
         {
-            // Only already-updated rows of this block (s <= j < i) are nonzero; everything else is still 0.
+            // Columns are sorted, so the entries left of the diagonal are exactly j < i. Of those only the
+            // already-updated rows of this block (j >= s) are nonzero; everything else is still 0.
             double sum = b[i];
-            uint below = (uint)(i - s);
-            for (int k = rp[i]; k < rp[i + 1]; k++)
+            int d = dpos[i];
+            if (!offBlock[i])
             {
-                int j = ci[k];
-                if ((uint)(j - s) < below)
+                for (int k = rp[i]; k < d; k++)
                 {
-                    sum -= v[k] * x[j];
+                    sum -= v[k] * x[ci[k]];
+                }
+            }
+            else
+            {
+                for (int k = rp[i]; k < d; k++)
+                {
+                    int j = ci[k];
+                    if (j >= s)
+                    {
+                        sum -= v[k] * x[j];
+                    }
                 }
             }
             x[i] = sum * dInv[i];
@@ -125,6 +143,7 @@ internal sealed class HybridGaussSeidel
     private void Sweep(double[] b, double[] x, int s, int e, bool forward)
     {
         var rp = _a.RowPointers; var ci = _a.ColumnIndices; var v = _a.Values; var dInv = _inverseDiagonal;
+        var offBlock = _hasOffBlock;
         var old = Parallel ? _snapshot : x;
         uint len = (uint)(e - s);
         int first = forward ? s : e - 1;
@@ -132,10 +151,21 @@ internal sealed class HybridGaussSeidel
         for (int t = 0, i = first; t < e - s; t++, i += step)
         {
             double sum = b[i];
-            for (int k = rp[i]; k < rp[i + 1]; k++)
+            int ke = rp[i + 1];
+            if (!offBlock[i])
             {
-                int j = ci[k];
-                sum -= v[k] * ((uint)(j - s) < len ? x[j] : old[j]);
+                for (int k = rp[i]; k < ke; k++)
+                {
+                    sum -= v[k] * x[ci[k]];
+                }
+            }
+            else
+            {
+                for (int k = rp[i]; k < ke; k++)
+                {
+                    int j = ci[k];
+                    sum -= v[k] * ((uint)(j - s) < len ? x[j] : old[j]);
+                }
             }
             x[i] += sum * dInv[i];
         }

@@ -38,48 +38,25 @@ internal static class Prolongator
         var rp = a.RowPointers; var ci = a.ColumnIndices; var v = a.Values;
         var prp = new int[n + 1];
         var parts = RowPartition.ByEntries(rp, n, a.NonZeroCount >= ParallelPolicy.MinimumParallelWork ? ParallelPolicy.DefaultWorkers : 1);
-        Parallel.For(0, parts.Count, p =>
-        {
-            var marker = new int[aggregates];
-            Array.Fill(marker, -1);
-            for (int i = parts.Start(p); i < parts.End(p); i++)
-            {
-                int count = 0;
-                for (int k = rp[i]; k < rp[i + 1]; k++)
-                {
-                    int c = agg[ci[k]];
-                    if (marker[c] != i)
-                    {
-                        marker[c] = i;
-                        count++;
-                    }
-                }
-                if (marker[agg[i]] != i)
-                {
-                    count++;
-                }
-                prp[i + 1] = count;
-            }
-        });
-        for (int i = 0; i < n; i++)
-        {
-            prp[i + 1] += prp[i];
-        }
-        var pci = new int[prp[n]];
-        var pv = new double[prp[n]];
+        var buffers = new RowBuffer[parts.Count];
         Parallel.For(0, parts.Count, p =>
         {
             var position = new int[aggregates];
             Array.Fill(position, -1);
-            for (int i = parts.Start(p); i < parts.End(p); i++)
+            int s0 = parts.Start(p), e0 = parts.End(p);
+            var buffer = new RowBuffer(4 * (e0 - s0));
+            for (int i = s0; i < e0; i++)
             {
-                int start = prp[i];
+                buffer.Reserve(rp[i + 1] - rp[i] + 1);
+                var bc = buffer.Columns;
+                var bv = buffer.Values;
+                int start = buffer.Count;
                 int next = start;
                 double scale = -omega / diagonal[i];
                 int own = agg[i];
                 position[own] = next;
-                pci[next] = own;
-                pv[next] = t[i];
+                bc[next] = own;
+                bv[next] = t[i];
                 next++;
                 for (int k = rp[i]; k < rp[i + 1]; k++)
                 {
@@ -90,20 +67,22 @@ internal static class Prolongator
                     if (pos < start)
                     {
                         position[c] = next;
-                        pci[next] = c;
-                        pv[next] = val;
+                        bc[next] = c;
+                        bv[next] = val;
                         next++;
                     }
                     else
                     {
-                        pv[pos] += val;
+                        bv[pos] += val;
                     }
                 }
-                Debug.Assert(next == prp[i + 1]);
-                SparseProduct.SortRow(pci.AsSpan(start, next - start), pv.AsSpan(start, next - start));
+                buffer.Count = next;
+                prp[i + 1] = next - start;
+                SparseProduct.SortRow(bc.AsSpan(start, next - start), bv.AsSpan(start, next - start));
             }
+            buffers[p] = buffer;
         });
-        return new CsrMatrix(n, aggregates, prp, pci, pv, validate: false);
+        return RowBuffer.Concatenate(n, aggregates, prp, buffers, parts.Start);
     }
 
     /// <summary>
@@ -131,11 +110,9 @@ internal static class Prolongator
     /// quotient (xᵀAx)/(xᵀDx) is a lower bound that converges to ρ; the result is raised by 5 % to cover
     /// the shortfall of a few iterations (over-estimating ρ only damps the prolongator smoothing slightly).
     /// </summary>
-    public static double SpectralRadiusEstimate(CsrMatrix a, double[] diagonal, int iterations)
+    public static double SpectralRadiusEstimate(CsrMatrix a, double[] diagonal, double[] x, double[] y, int iterations)
     {
         int n = a.Rows;
-        var x = new double[n];
-        var y = new double[n];
         // Deterministic pseudo-random start so that setup is reproducible.
         ulong state = 0x9E3779B97F4A7C15UL;
         for (int i = 0; i < n; i++)
@@ -144,23 +121,43 @@ internal static class Prolongator
             x[i] = (state >> 11) * (1.0 / (1UL << 53)) - 0.5;
         }
         double rho = 0;
+        var parts = RowPartition.Even(n, n >= 2 * ParallelPolicy.MinimumParallelWork ? ParallelPolicy.DefaultWorkers : 1);
+        var sums = new double[parts.Count * 3];
         for (int it = 0; it < iterations; it++)
         {
             a.Multiply(x, y);
-            double xAx = 0, xDx = 0, yDinvY = 0;
-            for (int i = 0; i < n; i++)
+            Parallel.For(0, parts.Count, p =>
             {
-                xAx += x[i] * y[i];
-                xDx += x[i] * diagonal[i] * x[i];
-                y[i] /= diagonal[i];
-                yDinvY += y[i] * diagonal[i] * y[i];
-            }
-            rho = Math.Max(rho, xAx / xDx);
-            double scale = 1.0 / Math.Sqrt(yDinvY);
-            for (int i = 0; i < n; i++)
+                double xAx = 0, xDx = 0, yDinvY = 0;
+                for (int i = parts.Start(p); i < parts.End(p); i++)
+                {
+                    double d = diagonal[i];
+                    xAx += x[i] * y[i];
+                    xDx += x[i] * d * x[i];
+                    double z = y[i] / d;
+                    y[i] = z;
+                    yDinvY += z * d * z;
+                }
+                sums[3 * p] = xAx;
+                sums[3 * p + 1] = xDx;
+                sums[3 * p + 2] = yDinvY;
+            });
+            double num = 0, den = 0, norm = 0;
+            for (int p = 0; p < parts.Count; p++)
             {
-                x[i] = y[i] * scale;
+                num += sums[3 * p];
+                den += sums[3 * p + 1];
+                norm += sums[3 * p + 2];
             }
+            rho = Math.Max(rho, num / den);
+            double scale = 1.0 / Math.Sqrt(norm);
+            Vectors.VectorKernels.ForChunks(n, (s, e) =>
+            {
+                for (int i = s; i < e; i++)
+                {
+                    x[i] = y[i] * scale;
+                }
+            });
         }
         return 1.05 * rho;
     }

@@ -24,10 +24,16 @@ namespace Electrostat.Numerics.Multigrid;
 public sealed class SmoothedAggregationAmg : IPreconditioner
 {
     private readonly Level[] _levels;
-    private readonly DenseCoarseSolver _coarse;
+    /// <summary>Largest last level that is factorised densely (rows); beyond it the last level is only relaxed.</summary>
+    private const int MaxDenseRows = 3000;
+
+    /// <summary>Symmetric sweep pairs on a last level too large to factorise.</summary>
+    private const int CoarseSweeps = 4;
+
+    private readonly DenseCoarseSolver? _coarse;
     private readonly int _sweeps;
 
-    private SmoothedAggregationAmg(Level[] levels, DenseCoarseSolver coarse, int sweeps, AmgHierarchyStats stats)
+    private SmoothedAggregationAmg(Level[] levels, DenseCoarseSolver? coarse, int sweeps, AmgHierarchyStats stats)
     {
         _levels = levels;
         _coarse = coarse;
@@ -71,6 +77,8 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
         double theta = options.StrengthThreshold;
         while (levels.Count + 1 < options.MaxLevels && a.Rows > options.CoarsestRows)
         {
+            // The level's work vectors double as scratch for the power iteration.
+            var work = new Level(a);
             var diagonal = a.Diagonal();
             for (int i = 0; i < diagonal.Length; i++)
             {
@@ -89,23 +97,35 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
             {
                 // Gershgorin is a safe but loose bound on P1 and coarse SA matrices (often 20-60 % high), which
                 // under-smooths the prolongator and costs CG iterations; the power estimate is never allowed above it.
-                rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(a, diagonal, options.SpectralRadiusIterations));
+                rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(a, diagonal, work.Residual, work.Solution, options.SpectralRadiusIterations));
             }
             double omega = options.ProlongatorDamping / rho;
             var p = Prolongator.Build(a, diagonal, agg, aggregates, nullSpace, omega, out nullSpace);
             var r = p.Transpose();
-            var ap = SparseProduct.Multiply(a, p, sortRows: false);
-            var coarse = SparseProduct.Multiply(r, ap, sortRows: true);
-            levels.Add(new Level(a, p, r, new HybridGaussSeidel(a)));
+            var coarse = GalerkinProduct.Compute(r, a, p);
+            work.Complete(p, r, new HybridGaussSeidel(a));
+            levels.Add(work);
             a = coarse;
             theta *= 0.5;
         }
-        var coarseSolver = new DenseCoarseSolver(a);
-        levels.Add(new Level(a, null, null, null));
+        // Aggregation can stall (e.g. a diagonal-dominant matrix without strong couplings) and leave a large
+        // last level; a dense factor of it would not fit, so such a level is relaxed by symmetric sweeps instead,
+        // which are accurate exactly when coarsening stalled for lack of strong couplings.
+        var last = new Level(a);
+        DenseCoarseSolver? coarseSolver = null;
+        if (a.Rows <= MaxDenseRows)
+        {
+            coarseSolver = new DenseCoarseSolver(a);
+        }
+        else
+        {
+            last.Complete(null, null, new HybridGaussSeidel(a));
+        }
+        levels.Add(last);
         var stats = new AmgHierarchyStats
         {
             Levels = levels.Select((l, i) => new AmgLevelStats(i, l.A.Rows, l.A.NonZeroCount)).ToArray(),
-            CoarsestSolver = coarseSolver.Method,
+            CoarsestSolver = coarseSolver?.Method ?? $"{CoarseSweeps} symmetric Gauss-Seidel sweeps",
             SetupSeconds = clock.Elapsed.TotalSeconds,
         };
         return new SmoothedAggregationAmg(levels.ToArray(), coarseSolver, options.Sweeps, stats);
@@ -127,7 +147,20 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
     {
         if (l == _levels.Length - 1)
         {
-            _coarse.Solve(b, x);
+            if (_coarse is not null)
+            {
+                _coarse.Solve(b, x);
+                return;
+            }
+            // k symmetric Gauss-Seidel steps from zero: the operator [I − (I − M_s⁻¹A)^k]A⁻¹ is symmetric.
+            var relax = _levels[l].Smoother!;
+            relax.ForwardFromZero(b, x);
+            relax.Backward(b, x);
+            for (int s = 1; s < CoarseSweeps; s++)
+            {
+                relax.Forward(b, x);
+                relax.Backward(b, x);
+            }
             return;
         }
         var level = _levels[l];
@@ -148,20 +181,27 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
         }
     }
 
-    private sealed class Level(CsrMatrix a, CsrMatrix? p, CsrMatrix? r, HybridGaussSeidel? smoother)
+    private sealed class Level(CsrMatrix a)
     {
         public CsrMatrix A { get; } = a;
 
-        public CsrMatrix? P { get; } = p;
+        public CsrMatrix? P { get; private set; }
 
-        public CsrMatrix? R { get; } = r;
+        public CsrMatrix? R { get; private set; }
 
-        public HybridGaussSeidel? Smoother { get; } = smoother;
+        public HybridGaussSeidel? Smoother { get; private set; }
 
         public double[] Residual { get; } = new double[a.Rows];
 
         public double[] RightHandSide { get; } = new double[a.Rows];
 
         public double[] Solution { get; } = new double[a.Rows];
+
+        public void Complete(CsrMatrix? p, CsrMatrix? r, HybridGaussSeidel smoother)
+        {
+            P = p;
+            R = r;
+            Smoother = smoother;
+        }
     }
 }

@@ -150,5 +150,35 @@ public class SmoothedAggregationAmgTests
         Assert.True(report.Converged, report.ToString());
     }
 
+    [Fact]
+    public void StalledCoarsening_OnDiagonallyDominantMatrix_StillGivesSpdPreconditioner()
+    {
+        // A strongly diagonally dominant matrix has no strong couplings at θ = 0.5, so aggregation stalls at the
+        // first level and the (large) last level is relaxed instead of factorised.
+        int n = 5000;
+        var t = new List<(int, int, double)>();
+        for (int i = 0; i < n; i++)
+        {
+            t.Add((i, i, 10.0));
+            if (i > 0) t.Add((i, i - 1, -1.0));
+            if (i < n - 1) t.Add((i, i + 1, -1.0));
+        }
+        var a = CsrMatrix.FromTriplets(n, n, t);
+        var amg = SmoothedAggregationAmg.Build(a, new AmgOptions { StrengthThreshold = 0.5 });
+        Assert.Single(amg.Stats.Levels);
+        Assert.Contains("sweeps", amg.Stats.CoarsestSolver);
+        var b = TestProblems.RandomVector(n, 2);
+        var report = ConjugateGradient.Solve(a, b, new double[n], amg);
+        Assert.True(report.Converged, report.ToString());
+        Assert.True(report.Iterations <= 6, report.ToString());
+        var x = TestProblems.RandomVector(n, 3);
+        var y = TestProblems.RandomVector(n, 4);
+        var mx = new double[n];
+        var my = new double[n];
+        amg.Apply(x, mx);
+        amg.Apply(y, my);
+        Assert.Equal(Dot(x, my), Dot(y, mx), 1e-10);
+    }
+
     private static double Dot(double[] a, double[] b) => Electrostat.Numerics.Vectors.VectorKernels.Dot(a, b);
 }
