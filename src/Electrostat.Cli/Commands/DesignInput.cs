@@ -26,7 +26,7 @@ internal static class DesignInput
         var result = DesignLoader.Load(path, overrides);
         if (result.HasErrors)
         {
-            foreach (var p in result.Problems.OrderByDescending(p => p.Severity)) stderr.WriteLine(p.ToString());
+            foreach (var p in result.Problems.OrderByDescending(p => p.Severity).ThenBy(p => p.Line)) stderr.WriteLine(p.ToString());
             int errors = result.Errors.Count();
             stderr.WriteLine($"{errors} error{(errors == 1 ? "" : "s")}: the design is not valid.");
         }

@@ -45,6 +45,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
             foreach (var b in conductors.Concat(dielectrics)) box = box.Union(b.Shape.Bounds);
             if (box.IsEmpty)
             {
+                if (Sink.HasErrors) return null; // the bodies themselves failed to read; do not pile on
                 Sink.Error(marginToken, "the enclosure margin needs at least one body to surround", "add conductors, or give the enclosure an explicit \"shape\"");
                 return null;
             }
@@ -198,8 +199,9 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
                 var b = conductors[j];
                 var op = new DistanceOp(polys[a], polys[b]);
                 if (op.Distance() > _touch) continue;
-                var at = NtsShapes.ToPoint(op.NearestPoints()[0]);
-                bool overlap = polys[a].Intersection(polys[b]).Area > areaTol;
+                var intersection = polys[a].Intersection(polys[b]);
+                bool overlap = intersection.Area > areaTol;
+                var at = NtsShapes.ToPoint(overlap ? intersection.InteriorPoint.Coordinate : op.NearestPoints()[0]);
                 string how = overlap ? "overlap" : "touch";
                 if (a.PotentialVolts is null != b.PotentialVolts is null)
                 {

@@ -251,7 +251,7 @@ internal sealed class ReadContext
                     string found = UnitTable.TryParse(ev.UnitText, out var k2, out _) ? $"\"{ev.UnitText}\" is a {UnitTable.NameOf(k2)} unit" : $"unknown unit \"{ev.UnitText}\"";
                     string hint = kind == QuantityKind.Dimensionless
                         ? "write a plain number without a unit"
-                        : $"{what} is a {UnitTable.NameOf(kind)}: use one of {UnitTable.ExamplesFor(kind)}";
+                        : $"{what} takes a {UnitTable.NameOf(kind)} unit: {UnitTable.ExamplesFor(kind)}";
                     Sink.Error(token, $"{what}: {found}", hint, charOffset: ev.UnitPosition);
                     return null;
                 }

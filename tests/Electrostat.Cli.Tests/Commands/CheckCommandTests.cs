@@ -59,6 +59,19 @@ public class CheckCommandTests
         }
     }
 
+    public static TheoryData<string> InvalidExamples() =>
+        new(Directory.EnumerateFiles(Path.Combine(RepoPaths.Geometries, "invalid"), "*.json").OrderBy(p => p, StringComparer.Ordinal));
+
+    [Theory]
+    [MemberData(nameof(InvalidExamples))]
+    public void Check_RejectsEveryInvalidExampleWithLocatedMessages(string path)
+    {
+        var (exit, stdout, stderr) = CliRun.Run("check", path);
+        Assert.Equal(ExitCodes.InputError, exit);
+        Assert.Equal("", stdout);
+        Assert.Matches(@":\d+:\d+: error: ", stderr);
+    }
+
     [Fact]
     public void Check_MissingFile_Exits2()
     {

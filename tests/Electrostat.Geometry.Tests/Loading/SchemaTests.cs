@@ -11,7 +11,7 @@ public class SchemaTests
     private static JToken Parse(string text) =>
         JToken.Parse(text, new JsonLoadSettings { CommentHandling = CommentHandling.Ignore });
 
-    public static TheoryData<string> Examples() => new(RepoPaths.ExampleDesigns().Select(Path.GetFileName)!);
+    public static TheoryData<string> Examples() => new(RepoPaths.ExampleDesigns().Select(p => Path.GetRelativePath(RepoPaths.Geometries, p)));
 
     [Theory]
     [MemberData(nameof(Examples))]
@@ -22,7 +22,8 @@ public class SchemaTests
         var json = Parse(text);
         var errors = schema.Validate(json);
         Assert.True(errors.Count == 0, string.Join("\n", errors.Select(e => $"{e.Path}: {e.Kind}")));
-        Assert.Equal("../docs/design-file.schema.json", (string?)json["$schema"]);
+        string expected = Path.GetRelativePath(Path.GetDirectoryName(Path.Combine(RepoPaths.Geometries, file))!, SchemaPath).Replace('\\', '/');
+        Assert.Equal(expected, (string?)json["$schema"]);
         Assert.StartsWith("//", text, StringComparison.Ordinal); // every example opens with a comment header
     }
 

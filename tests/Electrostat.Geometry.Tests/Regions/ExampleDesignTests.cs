@@ -6,7 +6,7 @@ namespace Electrostat.Geometry.Tests.Regions;
 
 public class ExampleDesignTests
 {
-    public static TheoryData<string> Examples() => new(RepoPaths.ExampleDesigns().Select(Path.GetFileName)!);
+    public static TheoryData<string> Examples() => new(RepoPaths.ExampleDesigns().Select(p => Path.GetRelativePath(RepoPaths.Geometries, p)));
 
     private static Design Load(string file)
     {
@@ -103,5 +103,34 @@ public class ExampleDesignTests
         // Pads 4 mm wide with 1 mm gaps: the left and centre pads are 1 mm apart.
         var (dist, _, _) = d.Regions.ConductorClearance(0, 1);
         Assert.Equal(1e-3, dist, 1e-12);
+    }
+
+    [Fact]
+    public void ValidationCases_HaveExactAnnulusAreas()
+    {
+        // Elementary geometry: annulus π(b² − a²); the axisymmetric half-annulus is half of it.
+        var coax = Load(Path.Combine("validation", "coaxial-cylinders.json"));
+        Assert.Equal(Math.PI * (100 - 4) * 1e-6, coax.Enclosure.Shape.Area - coax.Conductors[0].Shape.Area, 1e-15);
+        var spheres = Load(Path.Combine("validation", "concentric-spheres.json"));
+        Assert.Equal(0.5 * Math.PI * (400 - 25) * 1e-6, spheres.Enclosure.Shape.Area - spheres.Conductors[0].Shape.Area, 1e-15);
+        Assert.Single(spheres.Enclosure.Shape.Outer.Segments, s => s.Marker == BoundaryMarker.Axis);
+        Assert.Equal(1.0, spheres.BackgroundMaterial.RelativePermittivity);
+    }
+
+    [Fact]
+    public void InvalidExamples_ReportEveryIndependentMistake()
+    {
+        var typos = DesignLoader.Load(Path.Combine(RepoPaths.Geometries, "invalid", "typos-and-units.json"));
+        var messages = typos.Errors.Select(e => e.Message).ToList();
+        Assert.Equal(4, messages.Count);
+        Assert.Contains(messages, m => m.Contains("breakdown_feild", StringComparison.Ordinal));
+        Assert.Contains(messages, m => m.Contains("unknown unit \"kW\"", StringComparison.Ordinal));
+        Assert.Contains(messages, m => m.Contains("unknown parameter 'gapp'", StringComparison.Ordinal));
+        Assert.Contains(messages, m => m.Contains("fillet radius 4 mm at point 0 is too large", StringComparison.Ordinal));
+        Assert.All(typos.Errors, e => Assert.True(e.Line > 0 && e.Column > 0));
+        var shortCircuit = DesignLoader.Load(Path.Combine(RepoPaths.Geometries, "invalid", "short-circuit.json"));
+        var e = Assert.Single(shortCircuit.Errors);
+        Assert.Contains("short circuit", e.Message, StringComparison.Ordinal);
+        Assert.NotNull(e.Coordinate);
     }
 }
