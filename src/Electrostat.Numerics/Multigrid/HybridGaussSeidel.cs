@@ -19,17 +19,17 @@ namespace Electrostat.Numerics.Multigrid;
 /// </remarks>
 internal sealed class HybridGaussSeidel
 {
-    private readonly CsrMatrix _a;
+    private readonly PackedCsr _a;
     private readonly RowPartition _blocks;
     private readonly double[] _inverseDiagonal;
     private readonly double[] _snapshot;
     private readonly int[] _diagonalPosition;
     private readonly bool[] _hasOffBlock;
 
-    public HybridGaussSeidel(CsrMatrix a)
+    public HybridGaussSeidel(PackedCsr a)
     {
         _a = a;
-        int workers = a.NonZeroCount >= ParallelPolicy.MinimumParallelWork ? ParallelPolicy.DefaultWorkers : 1;
+        int workers = a.RowPointers[a.Rows] >= ParallelPolicy.MinimumParallelWork ? ParallelPolicy.DefaultWorkers : 1;
         _blocks = RowPartition.ByEntries(a.RowPointers, a.Rows, workers);
         _inverseDiagonal = new double[a.Rows];
         _snapshot = _blocks.Count > 1 ? new double[a.Rows] : [];
