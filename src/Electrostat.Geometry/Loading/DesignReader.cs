@@ -107,6 +107,10 @@ internal sealed class DesignReader
                 else _sink.Error(bgToken, $"unknown material \"{bg}\" for the background", MaterialHint(bg, materials));
             }
         }
+        else if (materials.TryGetValue(Material.Vacuum.Name, out var declaredVacuum))
+        {
+            background = declaredVacuum;
+        }
         else
         {
             _sink.Note(root, "no \"background\" given: the space between bodies is vacuum (relative permittivity 1)",
@@ -116,7 +120,7 @@ internal sealed class DesignReader
         var conductors = ReadConductors(root, materials);
         var dielectrics = ReadDielectrics(root, materials);
         var enclosureToken = _ctx.Required(root, "enclosure", "the design file", "add \"enclosure\": {\"margin\": 10} for a grounded box around everything, or {\"shape\": {...}}");
-        var checks = ReadChecks(root["checks"], materials, conductors);
+        var checks = ReadChecks(root, materials);
 
         var validator = new DesignValidator(_ctx, _shapes);
         var enclosure = validator.BuildEnclosure(enclosureToken, conductors, dielectrics);
@@ -309,8 +313,9 @@ internal sealed class DesignReader
         return result;
     }
 
-    private DesignChecks ReadChecks(JToken? token, Dictionary<string, Material> materials, List<BodyDraft> conductors)
+    private DesignChecks ReadChecks(JObject root, Dictionary<string, Material> materials)
     {
+        var token = root["checks"];
         if (token is null) return DesignChecks.None;
         if (_ctx.AsObject(token, "checks") is not JObject obj) return DesignChecks.None;
         _ctx.CheckKeys(obj, "checks", ChecksKeys);
@@ -332,7 +337,9 @@ internal sealed class DesignReader
         var pairs = new List<ClearanceRule>();
         if (obj["pairs"] is { } pt && _ctx.AsArray(pt, "checks.pairs") is JArray pa)
         {
-            var conductorNames = conductors.Select(c => c.Name).ToList();
+            // Names as written, including conductors whose shapes failed (their own errors are reported already).
+            var conductorNames = (root["conductors"] as JArray ?? []).OfType<JObject>()
+                .Select(c => c["name"]).Where(n => n?.Type == JTokenType.String).Select(n => ((string)n!).Trim()).ToList();
             foreach (var item in pa)
             {
                 if (_ctx.AsObject(item, "a clearance pair") is not JObject po) continue;

@@ -106,6 +106,11 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         {
             if (used[k]) continue;
             var (isX, v, t) = planes[k];
+            if (axisymmetric && isX && Math.Abs(v) <= tol)
+            {
+                Sink.Note(t, "in an axisymmetric design the edge on r = 0 is the axis and is marked automatically", "remove this symmetry plane");
+                continue;
+            }
             Sink.Error(t, string.Create(CultureInfo.InvariantCulture, $"no straight enclosure edge lies on {(isX ? "x" : "y")} = {UnitTable.Format(v, QuantityKind.Length)}"),
                 "a symmetry plane must coincide with a straight edge of the enclosure; check the value");
         }
@@ -254,7 +259,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         bool charged = conductors.Any(c => c.ChargeCoulombs is double q && q != 0);
         if (potentials.Count < 2 && !charged)
         {
-            Sink.Warning(null, "the design has no potential difference: every conductor and the enclosure are at the same potential, so the field is zero everywhere",
+            Sink.Warning(conductors.Count > 0 ? conductors[0].Token.Parent : null, "the design has no potential difference: every conductor and the enclosure are at the same potential, so the field is zero everywhere",
                 "give at least one conductor a different potential, or a floating conductor a charge");
         }
         if (!ok) return null;

@@ -1,24 +1,30 @@
 namespace Electrostat.Geometry.Loading;
 
-/// <summary>Did-you-mean suggestions by Levenshtein edit distance (Levenshtein 1966, dynamic programming over prefixes).</summary>
+/// <summary>Did-you-mean suggestions by edit distance (dynamic programming over prefixes).</summary>
 internal static class Suggestions
 {
+    /// <summary>
+    /// Optimal-string-alignment distance: insertions, deletions, substitutions and swaps of neighbours each cost 1
+    /// (Damerau 1964 extension of Levenshtein's distance; case-insensitive), because swapped letters are a common typo.
+    /// </summary>
     public static int EditDistance(string a, string b)
     {
-        var prev = new int[b.Length + 1];
-        var cur = new int[b.Length + 1];
-        for (int j = 0; j <= b.Length; j++) prev[j] = j;
+        var d = new int[a.Length + 1, b.Length + 1];
+        for (int i = 0; i <= a.Length; i++) d[i, 0] = i;
+        for (int j = 0; j <= b.Length; j++) d[0, j] = j;
         for (int i = 1; i <= a.Length; i++)
         {
-            cur[0] = i;
             for (int j = 1; j <= b.Length; j++)
             {
-                int cost = char.ToLowerInvariant(a[i - 1]) == char.ToLowerInvariant(b[j - 1]) ? 0 : 1;
-                cur[j] = Math.Min(Math.Min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
+                char ca = char.ToLowerInvariant(a[i - 1]), cb = char.ToLowerInvariant(b[j - 1]);
+                int cost = ca == cb ? 0 : 1;
+                int v = Math.Min(Math.Min(d[i - 1, j] + 1, d[i, j - 1] + 1), d[i - 1, j - 1] + cost);
+                if (i > 1 && j > 1 && ca == char.ToLowerInvariant(b[j - 2]) && char.ToLowerInvariant(a[i - 2]) == cb)
+                    v = Math.Min(v, d[i - 2, j - 2] + 1);
+                d[i, j] = v;
             }
-            (prev, cur) = (cur, prev);
         }
-        return prev[b.Length];
+        return d[a.Length, b.Length];
     }
 
     /// <summary>The closest candidate within a distance of about a third of the word, or null.</summary>

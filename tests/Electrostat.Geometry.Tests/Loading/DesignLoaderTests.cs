@@ -143,4 +143,32 @@ public class DesignLoaderTests
         var d = Valid("// header\n" + DesignTexts.Base.Replace("\"units\": \"mm\",", "\"units\": \"mm\", /* inline */", StringComparison.Ordinal));
         Assert.Equal("mm", d.Units.Symbol);
     }
+
+    [Fact]
+    public void ConductorOnSymmetryPlane_IsAllowedAtAnyPotential()
+    {
+        // The 10 kV circle touches the enclosure's top edge, which is a mirror plane, not a 0 V wall.
+        string text = DesignTexts.With(("\"center\": [0, 10]", "\"center\": [0, 45]"),
+            ("\"max\": [50, 50] }, \"potential\": 0", "\"max\": [50, 50] }, \"potential\": 0, \"symmetry_planes\": [{ \"y\": 50 }]"));
+        var d = Valid(text);
+        Assert.False(d.Electrodes[0].TouchesEnclosure);
+    }
+
+    [Fact]
+    public void AxisDeclaredAsSymmetryPlane_GetsNoteNotError()
+    {
+        string text = DesignTexts.With(("\"planar\"", "\"axisymmetric\""), ("\"min\": [-50, -50]", "\"min\": [0, -50]"),
+            ("\"potential\": 0 },\n", "\"potential\": 0, \"symmetry_planes\": [{ \"x\": 0 }] },\n"),
+            ("\"min\": [-20, -10]", "\"min\": [0, -10]"), ("\"min\": [-30, 20]", "\"min\": [0, 20]"), ("\"center\": [0, 10]", "\"center\": [8, 10]"));
+        var result = DesignLoader.LoadFromText(text);
+        Assert.False(result.HasErrors, string.Join("\n", result.Problems));
+        Assert.Contains(result.Problems, p => p.Severity == ProblemSeverity.Note && p.Message.Contains("axis", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Problem_ToString_IsOneLocatedLine()
+    {
+        var p = new DesignProblem(ProblemSeverity.Error, "d.json", "$.conductors[0].shape", 12, 7, new Point2(0.001, -0.0025), "outline crosses itself", "move the points");
+        Assert.Equal("d.json:12:7: error: outline crosses itself (at $.conductors[0].shape, near (1 mm, -2.5 mm)); fix: move the points", p.ToString());
+    }
 }

@@ -49,7 +49,7 @@ public class MalformedDesignTests
         ["dielectric-outside"] = new([("\"max\": [30, 30]", "\"max\": [30, 60]")], "dielectric \"block\" lies (partly) outside the enclosure", "{ \"type\": \"rectangle\", \"min\": [-30, 20]", true),
         ["axisymmetric-negative-r"] = new([("\"planar\"", "\"axisymmetric\""), ("\"min\": [-50, -50]", "\"min\": [0, -50]")], "conductor \"gnd\" reaches r < 0", "{ \"type\": \"rectangle\", \"min\": [-20", true),
         ["floating-touches-fixed"] = new([("\"potential\": \"10 kV\"", "\"floating\": true"), ("\"max\": [20, 0]", "\"max\": [20, 5]")], "floating conductor \"hv\" and fixed conductor \"gnd\" touch", "{ \"name\": \"gnd\"", true),
-        ["no-potential-difference"] = new([("\"potential\": \"10 kV\"", "\"potential\": 0")], "no potential difference", null, false, ProblemSeverity.Warning),
+        ["no-potential-difference"] = new([("\"potential\": \"10 kV\"", "\"potential\": 0")], "no potential difference", "[\n    { \"name\": \"hv\"", true, ProblemSeverity.Warning),
         ["partial-dielectric-overlap"] = new([("\"max\": [30, 30] } }", "\"max\": [30, 30] } },\n    { \"name\": \"slab\", \"material\": \"oil\", \"shape\": { \"type\": \"rectangle\", \"min\": [20, 25], \"max\": [40, 40] } }")], "dielectrics \"block\" and \"slab\" partly overlap", "{ \"name\": \"slab\"", true, ProblemSeverity.Warning),
         ["unknown-shape-type"] = new([("\"type\": \"circle\"", "\"type\": \"circel\"")], "did you mean 'circle'?", "\"circel\"", true),
         ["potential-and-floating"] = new([("\"potential\": \"10 kV\"", "\"potential\": \"10 kV\", \"floating\": true")], "has both \"potential\" and \"floating\"", null, false),
@@ -58,7 +58,12 @@ public class MalformedDesignTests
         ["hole-outside"] = new([("\"max\": [30, 30] }", "\"max\": [30, 30], \"holes\": [{ \"type\": \"circle\", \"center\": [40, 25], \"radius\": 2 }] }")], "hole 0 of dielectric \"block\" is not inside its outline", "{ \"type\": \"circle\", \"center\": [40", true),
         ["depth-in-axisymmetric"] = new([("\"planar\",", "\"axisymmetric\", \"depth\": 10,")], "\"depth\" applies to planar designs only", "\"depth\"", true),
         ["reserved-parameter"] = new([("\"gap\": 5", "\"mm\": 5")], "parameter name \"mm\" is reserved", "\"mm\": 5", true),
-        ["no-conductors"] = new([("\"conductors\": [", "\"conductors\": [], \"unused\": [")], "unknown key \"unused\"", "\"unused\"", true),
+        ["unknown-key-after-empty-list"] = new([("\"conductors\": [", "\"conductors\": [], \"unused\": [")], "unknown key \"unused\"", "\"unused\"", true),
+        ["no-conductors"] = new([("\"conductors\": [", "\"conductors\": [], \"unused\": [")], "the design has no conductors", "[], \"unused\"", true),
+        ["pair-unknown-conductor"] = new([("\"dielectrics\": [", "\"checks\": { \"pairs\": [ { \"between\": [\"hv\", \"gnx\"], \"min_clearance\": 3 } ] },\n  \"dielectrics\": [")], "unknown conductor \"gnx\"", "\"gnx\"", true),
+        ["checks-unknown-material"] = new([("\"dielectrics\": [", "\"checks\": { \"materials\": { \"oli\": { \"min_margin\": 2 } } },\n  \"dielectrics\": [")], "did you mean 'oil'?", "\"oli\"", true),
+        ["floating-touches-wall"] = new([("\"potential\": \"10 kV\"", "\"floating\": true"), ("\"center\": [0, 10]", "\"center\": [0, 45]")], "floating conductor \"hv\" touches the enclosure", "{ \"name\": \"hv\"", true),
+        ["arc-end-off-circle"] = new([("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"path\", \"start\": [-10, 20], \"segments\": [ { \"line_to\": [10, 20] }, { \"arc_to\": [-12, 20], \"center\": [0, 20] } ] }")], "end point is 12 mm from the centre but the start is 10 mm", "[-12, 20]", true),
     };
 
     public static TheoryData<string> CaseNames() => new(Cases.Keys);
