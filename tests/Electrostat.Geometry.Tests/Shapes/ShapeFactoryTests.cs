@@ -116,4 +116,23 @@ public class ShapeFactoryTests
         var ex = Assert.Throws<GeometryException>(() => ShapeFactory.Rectangle(new Point2(0, 0), new Point2(4e-3, 2e-3), 1.1e-3));
         Assert.Contains("at most 1 mm", ex.Hint, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void ConcaveFillet_AddsMaterialInTheNotch()
+    {
+        // L shape: 2×2 square minus the 1×1 upper-right square, area 3. Rounding the inner (reflex) corner at (1, 1)
+        // with radius r fills the notch between the edges: area grows by r² − π r²/4 (elementary geometry).
+        double r = 0.25;
+        var c = ShapeFactory.Polygon(
+        [
+            new(new Point2(0, 0)), new(new Point2(2, 0)), new(new Point2(2, 1)), new(new Point2(1, 1), r), new(new Point2(1, 2)), new(new Point2(0, 2)),
+        ]);
+        Assert.Equal(3 + r * r - Math.PI * r * r / 4, c.Area, 1e-12);
+        var arc = Assert.Single(c.Segments.OfType<ArcSegment>());
+        Assert.True(arc.SweepAngle < 0); // a right turn on a counter-clockwise outline
+        Assert.Equal(1 + r, arc.Center.X, 1e-12);
+        Assert.Equal(1 + r, arc.Center.Y, 1e-12);
+        Assert.False(c.Contains(new Point2(1 + r, 1 + r)));
+        Assert.True(c.Contains(new Point2(1.02, 1.02))); // filled by the fillet
+    }
 }
