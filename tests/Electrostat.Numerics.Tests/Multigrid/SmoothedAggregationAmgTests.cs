@@ -180,5 +180,43 @@ public class SmoothedAggregationAmgTests
         Assert.Equal(Dot(x, my), Dot(y, mx), 1e-10);
     }
 
+    [Fact]
+    public void MergedFloatingDof_WithLongRow_ConvergesAndMatchesDirectSolve()
+    {
+        // A "floating conductor": all nodes inside [0.4, 0.6]² share one dof, so that dof's row couples to the
+        // whole ring around the block. Reference: MathNet dense Cholesky on the same (small) system.
+        int m = 40;
+        var x = new double[(m + 1) * (m + 1)];
+        var y = new double[x.Length];
+        var dof = new int[x.Length];
+        int count = 1; // dof 0 is the merged conductor
+        for (int j = 0; j <= m; j++)
+        {
+            for (int i = 0; i <= m; i++)
+            {
+                int n = j * (m + 1) + i;
+                x[n] = (double)i / m;
+                y[n] = (double)j / m;
+                bool boundary = i == 0 || j == 0 || i == m || j == m;
+                bool inside = x[n] >= 0.4 && x[n] <= 0.6 && y[n] >= 0.4 && y[n] <= 0.6;
+                dof[n] = boundary ? -1 : inside ? 0 : count++;
+            }
+        }
+        var tri = TestProblems.StructuredTriangles(m);
+        var a = CsrAssemblyPlan.Create(tri, 3, dof, count).Assemble((e, k) => TestProblems.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
+        Assert.True(a.RowPointers[1] - a.RowPointers[0] > 30);
+        var b = TestProblems.RandomVector(count, 5);
+        var amg = SmoothedAggregationAmg.Build(a, new AmgOptions { CoarsestRows = 30 });
+        var u = new double[count];
+        var report = ConjugateGradient.Solve(a, b, u, amg, new PcgOptions { RelativeTolerance = 1e-12 });
+        Assert.True(report.Converged, report.ToString());
+        Assert.True(report.Iterations <= 20, report.ToString());
+        var expected = a.ToDense().Cholesky().Solve(MathNet.Numerics.LinearAlgebra.Vector<double>.Build.DenseOfArray(b));
+        for (int i = 0; i < count; i++)
+        {
+            Assert.Equal(expected[i], u[i], 1e-8 * expected.AbsoluteMaximum());
+        }
+    }
+
     private static double Dot(double[] a, double[] b) => Electrostat.Numerics.Vectors.VectorKernels.Dot(a, b);
 }
