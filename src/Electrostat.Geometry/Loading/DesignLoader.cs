@@ -10,7 +10,7 @@ namespace Electrostat.Geometry.Loading;
 /// </summary>
 /// <example>
 /// <code>
-/// var result = DesignLoader.Load("geometries/hv-electrode.json");
+/// var result = DesignLoader.Load("geometries/hv-electrode-over-plate.json");
 /// if (result.HasErrors) { foreach (var p in result.Problems) Console.Error.WriteLine(p); return 2; }
 /// Design design = result.Design!;
 /// </code>

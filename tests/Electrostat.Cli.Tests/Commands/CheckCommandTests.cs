@@ -22,7 +22,7 @@ public class CheckCommandTests
     [Fact]
     public void Check_PrintsPotentialsAreasAndParameters()
     {
-        var (exit, stdout, _) = CliRun.Run("check", Path.Combine(RepoPaths.Geometries, "hv-electrode-spacer.json"));
+        var (exit, stdout, _) = CliRun.Run("check", Path.Combine(RepoPaths.Geometries, "hv-electrode-over-plate.json"));
         Assert.Equal(ExitCodes.Ok, exit);
         Assert.Contains("20 kV", stdout, StringComparison.Ordinal);
         Assert.Contains("planar, depth 100 mm", stdout, StringComparison.Ordinal);
@@ -33,7 +33,7 @@ public class CheckCommandTests
     [Fact]
     public void Check_WithSet_OverridesParameter()
     {
-        var (exit, stdout, stderr) = CliRun.Run("check", Path.Combine(RepoPaths.Geometries, "hv-electrode-spacer.json"), "--set", "spacer_width=12");
+        var (exit, stdout, stderr) = CliRun.Run("check", Path.Combine(RepoPaths.Geometries, "hv-electrode-over-plate.json"), "--set", "spacer_width=12");
         Assert.True(exit == ExitCodes.Ok, stderr);
         Assert.Contains("area 120 mm^2", stdout, StringComparison.Ordinal);
     }

@@ -35,7 +35,7 @@ public class ExampleDesignTests
     [Fact]
     public void HvElectrode_AreasMatchClosedForms()
     {
-        var d = Load("hv-electrode-spacer.json");
+        var d = Load("hv-electrode-over-plate.json");
         // Rounded rectangle 40 × 10 mm, r = 3 mm: A = w h − (4 − π) r² (elementary geometry).
         double bar = 40e-3 * 10e-3 - (4 - Math.PI) * 9e-6;
         Assert.Equal(bar, d.Conductors[0].Shape.Area, 1e-15);
@@ -62,7 +62,7 @@ public class ExampleDesignTests
     [InlineData(-19.0, 12.0, RegionKind.Conductor, 0)] // inside the rounded corner arc
     public void HvElectrode_ClassifyFollowsPriorityRule(double xMm, double yMm, RegionKind kind, int index)
     {
-        var d = Load("hv-electrode-spacer.json");
+        var d = Load("hv-electrode-over-plate.json");
         Assert.Equal(new RegionHit(kind, index), d.Classify(xMm * 1e-3, yMm * 1e-3));
     }
 
