@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using System.Globalization;
 using Electrostat.Numerics.Multigrid;
+using Electrostat.Numerics.Ordering;
 using Electrostat.Numerics.Solvers;
 using Electrostat.Numerics.Sparse;
 
@@ -11,6 +12,7 @@ namespace Electrostat.Bench;
 /// Per case: symbolic + numeric assembly, AMG setup, PCG to 1e-10 relative residual from zero, then one more
 /// right-hand side with the same hierarchy. Times are medians over the repeats.
 /// Options: <c>--cells 126,251,501,1001</c> (cells per side; unknowns = (cells − 1)²), <c>--repeat 5</c>, and the
+/// <c>--shuffle 1</c> (random dof numbering), <c>--renumber 1</c> (reverse Cuthill–McKee dof numbering), and the
 /// AMG settings <c>--theta</c>, <c>--sweeps</c>, <c>--power</c>, <c>--coarsest</c> (see <see cref="AmgOptions"/>).
 /// </summary>
 internal sealed class AmgBench : IBenchSuite
@@ -22,6 +24,7 @@ internal sealed class AmgBench : IBenchSuite
         int[] cells = [126, 251, 501, 1001];
         int repeat = 5;
         var amgOptions = new AmgOptions();
+        bool shuffle = false, renumber = false;
         for (int i = 0; i + 1 < args.Length; i += 2)
         {
             switch (args[i])
@@ -41,6 +44,12 @@ internal sealed class AmgBench : IBenchSuite
                 case "--coarsest":
                     amgOptions = amgOptions with { CoarsestRows = int.Parse(args[i + 1], CultureInfo.InvariantCulture) };
                     break;
+                case "--shuffle":
+                    shuffle = args[i + 1] == "1";
+                    break;
+                case "--renumber":
+                    renumber = args[i + 1] == "1";
+                    break;
                 case "--repeat":
                     repeat = int.Parse(args[i + 1], CultureInfo.InvariantCulture);
                     break;
@@ -53,7 +62,7 @@ internal sealed class AmgBench : IBenchSuite
         bool allConverged = true;
         foreach (int m in cells)
         {
-            var problem = AmgBenchProblem.Create(m);
+            var problem = AmgBenchProblem.Create(m, shuffle: shuffle);
             var b1 = problem.UnitLoad();
             var rng = new Random(7);
             var b2 = new double[problem.DofCount];
@@ -71,17 +80,21 @@ internal sealed class AmgBench : IBenchSuite
             {
                 GC.Collect();
                 var clock = Stopwatch.StartNew();
-                var plan = CsrAssemblyPlan.Create(problem.Triangles, 3, problem.DofOfNode, problem.DofCount);
+                // Optional: number the dofs in reverse Cuthill-McKee order first (counted as assembly time).
+                var dofOfNode = renumber ? DofOrdering.ReverseCuthillMcKee(problem.Triangles, 3, problem.DofOfNode, problem.DofCount) : problem.DofOfNode;
+                var plan = CsrAssemblyPlan.Create(problem.Triangles, 3, dofOfNode, problem.DofCount);
                 var a = plan.Assemble(problem.ElementStiffness);
                 assembly.Add(clock.Elapsed.TotalSeconds);
                 clock.Restart();
                 var amg = SmoothedAggregationAmg.Build(a, amgOptions);
                 setup.Add(clock.Elapsed.TotalSeconds);
                 var x = new double[problem.DofCount];
-                var report = ConjugateGradient.Solve(a, b1, x, amg, options);
+                var rhs1 = renumber ? Renumbered(b1, problem.DofOfNode, dofOfNode) : b1;
+                var rhs2 = renumber ? Renumbered(b2, problem.DofOfNode, dofOfNode) : b2;
+                var report = ConjugateGradient.Solve(a, rhs1, x, amg, options);
                 solve.Add(report.Seconds);
                 var x2 = new double[problem.DofCount];
-                var report2 = ConjugateGradient.Solve(a, b2, x2, amg, options);
+                var report2 = ConjugateGradient.Solve(a, rhs2, x2, amg, options);
                 extra.Add(report2.Seconds);
                 iterations = report.Iterations;
                 extraIterations = report2.Iterations;
@@ -91,9 +104,22 @@ internal sealed class AmgBench : IBenchSuite
             double peakMb = Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024.0);
             double asm = Median(assembly), set = Median(setup), sol = Median(solve), ext = Median(extra);
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"amg case=p1-square-{m} unknowns={problem.DofCount} iterations={iterations} setup_seconds={set:F3} solve_seconds={sol:F3} extra_rhs_seconds={ext:F3} peak_mb={peakMb:F0} assembly_seconds={asm:F3} total_seconds={asm + set + sol:F3} extra_rhs_iterations={extraIterations} {hierarchy}"));
+                $"amg case=p1-square-{m}{(shuffle ? "-shuffled" : "")}{(renumber ? "-rcm" : "")} unknowns={problem.DofCount} iterations={iterations} setup_seconds={set:F3} solve_seconds={sol:F3} extra_rhs_seconds={ext:F3} peak_mb={peakMb:F0} assembly_seconds={asm:F3} total_seconds={asm + set + sol:F3} extra_rhs_iterations={extraIterations} {hierarchy}"));
         }
         return allConverged ? 0 : 1;
+    }
+
+    private static double[] Renumbered(double[] b, int[] oldMap, int[] newMap)
+    {
+        var r = new double[b.Length];
+        for (int n = 0; n < oldMap.Length; n++)
+        {
+            if (oldMap[n] >= 0)
+            {
+                r[newMap[n]] = b[oldMap[n]];
+            }
+        }
+        return r;
     }
 
     private static double Median(List<double> values)

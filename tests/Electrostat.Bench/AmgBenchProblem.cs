@@ -30,7 +30,9 @@ internal sealed class AmgBenchProblem
 
     public int DofCount { get; }
 
-    public static AmgBenchProblem Create(int cells, int seed = 12345)
+    /// <summary>Builds the problem; with <paramref name="shuffle"/> the dofs are numbered in random order (seeded),
+    /// the worst case for locality, as a mesh refined without renumbering might be.</summary>
+    public static AmgBenchProblem Create(int cells, int seed = 12345, bool shuffle = false)
     {
         int m = cells;
         int nodes = (m + 1) * (m + 1);
@@ -51,6 +53,19 @@ internal sealed class AmgBenchProblem
                 x[n] = i * h + jx;
                 y[n] = j * h + jy;
                 dof[n] = boundary ? -1 : count++;
+            }
+        }
+        if (shuffle)
+        {
+            var perm = new int[count];
+            for (int i = 0; i < count; i++)
+            {
+                perm[i] = i;
+            }
+            new Random(seed + 1).Shuffle(perm);
+            for (int n = 0; n < nodes; n++)
+            {
+                dof[n] = dof[n] < 0 ? -1 : perm[dof[n]];
             }
         }
         var tri = new int[m * m * 6];

@@ -226,17 +226,21 @@ public sealed class CsrMatrix
     {
         int n = Math.Min(Rows, Columns);
         var d = new double[n];
-        for (int i = 0; i < n; i++)
+        var rp = RowPointers; var ci = ColumnIndices; var v = Values;
+        Vectors.VectorKernels.ForChunks(n, (s, e) =>
         {
-            for (int k = RowPointers[i]; k < RowPointers[i + 1]; k++)
+            for (int i = s; i < e; i++)
             {
-                if (ColumnIndices[k] == i)
+                for (int k = rp[i]; k < rp[i + 1]; k++)
                 {
-                    d[i] = Values[k];
-                    break;
+                    if (ci[k] == i)
+                    {
+                        d[i] = v[k];
+                        break;
+                    }
                 }
             }
-        }
+        });
         return d;
     }
 

@@ -25,10 +25,14 @@ internal sealed class PackedCsr
         int nnz = source.NonZeroCount;
         Values = new float[nnz];
         var v = source.Values;
-        for (int k = 0; k < nnz; k++)
+        var packed = Values;
+        Vectors.VectorKernels.ForChunks(nnz, (s, e) =>
         {
-            Values[k] = (float)v[k];
-        }
+            for (int k = s; k < e; k++)
+            {
+                packed[k] = (float)v[k];
+            }
+        });
         int workers = nnz >= ParallelPolicy.MinimumParallelWork ? ParallelPolicy.DefaultWorkers : 1;
         _partition = RowPartition.ByEntries(RowPointers, Rows, workers);
     }
