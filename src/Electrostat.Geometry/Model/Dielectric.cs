@@ -10,4 +10,8 @@ namespace Electrostat.Geometry.Model;
 /// <param name="Name">Name from the design file (unique among dielectrics).</param>
 /// <param name="Material">The filling material.</param>
 /// <param name="Shape">Exact outline.</param>
-public sealed record Dielectric(string Name, Material Material, Shape Shape);
+public sealed record Dielectric(string Name, Material Material, Shape Shape)
+{
+    /// <summary>Name of the filling material (key into <see cref="Design.Materials"/>).</summary>
+    public string MaterialName => Material.Name;
+}

@@ -89,6 +89,8 @@ public sealed class Contour
     /// </summary>
     public bool Contains(Point2 p)
     {
+        var b = Bounds;
+        if (p.X < b.MinX || p.X > b.MaxX || p.Y < b.MinY || p.Y > b.MaxY) return false;
         bool inside = false;
         foreach (var s in _segments)
         {
