@@ -34,6 +34,7 @@ internal sealed class DesignReader
 
     public DesignLoadResult Read(string text, IReadOnlyDictionary<string, string>? overrides)
     {
+        _sink.SetText(text);
         JToken root;
         try
         {
