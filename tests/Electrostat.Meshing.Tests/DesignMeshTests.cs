@@ -40,3 +40,40 @@ public class DesignMeshTests
         Assert.All(result.Mesh.TriangleRegion.Distinct(), a => Assert.Contains(a, attrs));
     }
 }
+
+public class DesignCurveCuttingTests
+{
+    private const string FilletDesign = """
+    {
+      "units": "mm",
+      "symmetry": "planar",
+      "enclosure": { "shape": { "type": "rectangle", "min": [-100, -60], "max": [100, 60] }, "potential": 0 },
+      "conductors": [
+        { "name": "bar", "potential": "1 kV",
+          "shape": { "type": "rectangle", "center": [0, 0], "width": 100, "height": 20, "corner_radius": 0.2 } }
+      ]
+    }
+    """;
+
+    [Fact]
+    public void SmallFilletOnLargePart_GetsSeveralChordsWithinTolerance()
+    {
+        var load = Electrostat.Geometry.Loading.DesignLoader.LoadFromText(FilletDesign);
+        Assert.False(load.HasErrors, string.Join("; ", load.Errors));
+        var design = load.Design!;
+        var input = DesignGraphBuilder.Build(design, new MeshOptions { MaxEdgeLengthMetres = 0.01 });
+        // Graph vertices within 0.2 mm of the fillet centre (49.8, 9.8) mm lie on the top-right fillet.
+        var g = input.Graph;
+        int onFillet = Enumerable.Range(0, g.VertexCount).Count(v =>
+            Math.Abs(Math.Sqrt(Math.Pow(g.X[v] - 0.0498, 2) + Math.Pow(g.Y[v] - 0.0098, 2)) - 0.0002) < 1e-9);
+        // Quarter arc with chords of at most 15°: at least 6 chords, so at least 7 vertices.
+        Assert.True(onFillet >= 7, $"only {onFillet} vertices on the fillet");
+        var result = Mesher.Generate(input.Graph, new MeshOptions { MaxEdgeLengthMetres = 0.01 });
+        var report = input.Validate(result);
+        Assert.True(report.IsValid, report.ToString());
+        Assert.True(result.Quality.MinAngleDegrees >= 28);
+        // The conductor surface is tagged as conductor 0, the box as enclosure.
+        Assert.Equal(BoundaryKind.Conductor, input.Tags[input.Tags.ConductorTag(0)!.Value].Kind);
+        Assert.Single(input.Tags.OfKind(BoundaryKind.Enclosure));
+    }
+}
