@@ -176,15 +176,15 @@ internal sealed class ReadContext
         }
         catch (ExpressionException e)
         {
-            ReportExpression(token, $"parameter '{name}': {e.Message}", e);
+            ParameterError(name, token, $"parameter '{name}': {e.Message}", e.Hint, e.Position);
             return null;
         }
         if (ev.UnitText is null) return ev.Value;
         if (!UnitTable.TryParse(ev.UnitText, out var kind, out double factor))
         {
-            Sink.Error(token, $"parameter '{name}': unknown unit \"{ev.UnitText}\"",
+            ParameterError(name, token, $"parameter '{name}': unknown unit \"{ev.UnitText}\"",
                 "use a length (mm, um, in, mil, m), potential (V, kV), field (kV/mm, V/m), charge (nC) or angle (deg, rad) unit",
-                charOffset: token.Type == JTokenType.String ? ev.UnitPosition : -1);
+                ev.UnitPosition);
             return null;
         }
         double si = ev.Value * factor;
@@ -194,6 +194,18 @@ internal sealed class ReadContext
             QuantityKind.Angle => si * 180 / Math.PI,
             _ => si,
         };
+    }
+
+    /// <summary>A problem in a parameter's value: located in the file, or on the command line for a --set override.</summary>
+    private void ParameterError(string name, JToken token, string message, string? hint, int charOffset)
+    {
+        if (_parameterSource.TryGetValue(name, out var src) && src.FromOverride)
+        {
+            Sink.Add(new DesignProblem(ProblemSeverity.Error, "--set", name, 0, 0, null,
+                $"--set {name}={src.Text}: {message} (at character {charOffset + 1})", hint));
+            return;
+        }
+        Sink.Error(token, message, hint, charOffset: token.Type == JTokenType.String ? charOffset : -1);
     }
 
     private void ReportExpression(JToken token, string message, ExpressionException e)

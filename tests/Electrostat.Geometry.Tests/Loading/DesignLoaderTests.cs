@@ -52,6 +52,17 @@ public class DesignLoaderTests
     }
 
     [Fact]
+    public void Override_WithBadExpression_IsReportedAgainstTheCommandLine()
+    {
+        var result = DesignLoader.LoadFromText(DesignTexts.Base, "t.json", new Dictionary<string, string> { ["gap"] = "2 * wdth" });
+        var p = Assert.Single(result.Errors);
+        Assert.Equal("--set", p.Source);
+        Assert.Equal("gap", p.JsonPath);
+        Assert.Contains("unknown parameter 'wdth'", p.Message, StringComparison.Ordinal);
+        Assert.Contains("at character 5", p.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void ParameterWithUnit_IsConvertedToDesignUnits()
     {
         // 25.4 mm is exactly 1 in (NIST SP 811, appendix B), so in an inch design gap = 1.
