@@ -35,28 +35,53 @@ internal static class Prolongator
             t[i] = norms[agg[i]] > 0 ? nullSpace[i] / norms[agg[i]] : 0.0;
         }
 
+        // Two passes (count, then fill the final arrays) rather than growable buffers: the extra pass is cheaper
+        // than allocating and page-faulting a second copy of P.
         var rp = a.RowPointers; var ci = a.ColumnIndices; var v = a.Values;
         var prp = new int[n + 1];
         var parts = RowPartition.ByEntries(rp, n, a.NonZeroCount >= ParallelPolicy.MinimumParallelWork ? ParallelPolicy.DefaultWorkers : 1);
-        var buffers = new RowBuffer[parts.Count];
+        Parallel.For(0, parts.Count, p =>
+        {
+            var marker = new int[aggregates];
+            Array.Fill(marker, -1);
+            for (int i = parts.Start(p); i < parts.End(p); i++)
+            {
+                int count = 0;
+                for (int k = rp[i]; k < rp[i + 1]; k++)
+                {
+                    int c = agg[ci[k]];
+                    if (marker[c] != i)
+                    {
+                        marker[c] = i;
+                        count++;
+                    }
+                }
+                if (marker[agg[i]] != i)
+                {
+                    count++;
+                }
+                prp[i + 1] = count;
+            }
+        });
+        for (int i = 0; i < n; i++)
+        {
+            prp[i + 1] += prp[i];
+        }
+        var pci = new int[prp[n]];
+        var pv = new double[prp[n]];
         Parallel.For(0, parts.Count, p =>
         {
             var position = new int[aggregates];
             Array.Fill(position, -1);
-            int s0 = parts.Start(p), e0 = parts.End(p);
-            var buffer = new RowBuffer(4 * (e0 - s0));
-            for (int i = s0; i < e0; i++)
+            for (int i = parts.Start(p); i < parts.End(p); i++)
             {
-                buffer.Reserve(rp[i + 1] - rp[i] + 1);
-                var bc = buffer.Columns;
-                var bv = buffer.Values;
-                int start = buffer.Count;
+                int start = prp[i];
                 int next = start;
                 double scale = -omega / diagonal[i];
                 int own = agg[i];
                 position[own] = next;
-                bc[next] = own;
-                bv[next] = t[i];
+                pci[next] = own;
+                pv[next] = t[i];
                 next++;
                 for (int k = rp[i]; k < rp[i + 1]; k++)
                 {
@@ -67,22 +92,20 @@ internal static class Prolongator
                     if (pos < start)
                     {
                         position[c] = next;
-                        bc[next] = c;
-                        bv[next] = val;
+                        pci[next] = c;
+                        pv[next] = val;
                         next++;
                     }
                     else
                     {
-                        bv[pos] += val;
+                        pv[pos] += val;
                     }
                 }
-                buffer.Count = next;
-                prp[i + 1] = next - start;
-                SparseProduct.SortRow(bc.AsSpan(start, next - start), bv.AsSpan(start, next - start));
+                Debug.Assert(next == prp[i + 1]);
+                SparseProduct.SortRow(pci.AsSpan(start, next - start), pv.AsSpan(start, next - start));
             }
-            buffers[p] = buffer;
         });
-        return RowBuffer.Concatenate(n, aggregates, prp, buffers, parts.Start);
+        return new CsrMatrix(n, aggregates, prp, pci, pv, validate: false);
     }
 
     /// <summary>

@@ -103,8 +103,10 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
             var p = Prolongator.Build(a, diagonal, agg, aggregates, nullSpace, omega, out nullSpace);
             var r = p.Transpose();
             var coarse = GalerkinProduct.Compute(r, a, p);
+            var packedP = new PackedCsr(p);
+            var packedR = new PackedCsr(r);
             var packed = new PackedCsr(a);
-            work.Complete(packed, new PackedCsr(p), new PackedCsr(r), new HybridGaussSeidel(packed));
+            work.Complete(packed, packedP, packedR, new HybridGaussSeidel(packed));
             levels.Add(work);
             a = coarse;
             theta *= 0.5;

@@ -20,6 +20,10 @@ namespace Electrostat.Numerics.Sparse;
 /// right-hand side; or rows = conductor nodes, columns = all nodes, for reaction charges).
 /// </para>
 /// <para>
+/// The plan keeps references to the connectivity and node→dof arrays (copying them would cost more memory
+/// traffic than the symbolic pass itself at 10⁶ nodes); they must not be changed while the plan is in use.
+/// </para>
+/// <para>
 /// The element matrix convention is row-major k × k in the element's local node order; entry (a, b) is
 /// added to matrix entry (rowDof(node a), columnDof(node b)) unless either map gives −1.
 /// </para>
@@ -39,8 +43,8 @@ public sealed class CsrAssemblyPlan
         NodesPerElement = nodesPerElement;
         ElementCount = connectivity.Length / nodesPerElement;
         _connectivity = connectivity;
-        _rowDofOfNode = (int[])rowDofOfNode.Clone();
-        _columnDofOfNode = ReferenceEquals(rowDofOfNode, columnDofOfNode) ? _rowDofOfNode : (int[])columnDofOfNode.Clone();
+        _rowDofOfNode = rowDofOfNode;
+        _columnDofOfNode = columnDofOfNode;
         _rowPointers = rowPointers;
         _columnIndices = columnIndices;
     }
@@ -207,7 +211,7 @@ public sealed class CsrAssemblyPlan
             }
         });
 
-        return new CsrAssemblyPlan(rowCount, columnCount, k, (int[])connectivity.Clone(), rowDofOfNode, columnDofOfNode, rowPointers, columnIndices);
+        return new CsrAssemblyPlan(rowCount, columnCount, k, connectivity, rowDofOfNode, columnDofOfNode, rowPointers, columnIndices);
     }
 
     /// <summary>
