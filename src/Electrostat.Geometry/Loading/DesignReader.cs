@@ -118,7 +118,7 @@ internal sealed class DesignReader
                 "add \"background\": \"<material>\" to fill it with e.g. air or oil");
         }
 
-        var conductors = ReadConductors(root, materials);
+        var conductors = ReadConductors(root);
         var dielectrics = ReadDielectrics(root, materials);
         var enclosureToken = _ctx.Required(root, "enclosure", "the design file", "add \"enclosure\": {\"margin\": 10} for a grounded box around everything, or {\"shape\": {...}}");
         var checks = ReadChecks(root, materials);
@@ -223,7 +223,7 @@ internal sealed class DesignReader
         return Suggestions.Closest(name, names) is { } c ? $"did you mean '{c}'? Otherwise declare it under \"materials\"" : "declare it under \"materials\"";
     }
 
-    private List<BodyDraft> ReadConductors(JObject root, Dictionary<string, Material> materials)
+    private List<BodyDraft> ReadConductors(JObject root)
     {
         var result = new List<BodyDraft>();
         var arr = _ctx.AsArray(_ctx.Required(root, "conductors", "the design file", "add \"conductors\": [{\"name\": ..., \"potential\": ..., \"shape\": {...}}]"), "conductors");

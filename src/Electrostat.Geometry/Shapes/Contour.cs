@@ -101,16 +101,17 @@ public sealed class Contour
             else if (s is ArcSegment arc)
             {
                 if (p.Y < arc.Center.Y - arc.Radius || p.Y > arc.Center.Y + arc.Radius) continue;
-                foreach (var (a0, a1) in MonotonePieces(arc))
+                // Walk the y-monotone pieces between the turning angles θ = π/2 + kπ (no allocation: hot path).
+                double lo = Math.Min(arc.StartAngle, arc.EndAngle), hi = Math.Max(arc.StartAngle, arc.EndAngle);
+                double a0 = lo;
+                double cut = Math.PI / 2 + Math.Ceiling((lo - Math.PI / 2) / Math.PI) * Math.PI;
+                while (a0 < hi)
                 {
-                    var pa = arc.PointAtAngle(a0);
-                    var pb = arc.PointAtAngle(a1);
-                    if ((pa.Y > p.Y) == (pb.Y > p.Y)) continue;
-                    // On a y-monotone piece cos θ keeps its sign, so the crossing x is on one side of the centre.
-                    double side = Math.Cos(0.5 * (a0 + a1)) >= 0 ? 1 : -1;
-                    double dy = p.Y - arc.Center.Y;
-                    double x = arc.Center.X + side * Math.Sqrt(Math.Max(0, arc.Radius * arc.Radius - dy * dy));
-                    if (x > p.X) inside = !inside;
+                    if (cut <= a0) { cut += Math.PI; continue; }
+                    double a1 = Math.Min(cut, hi);
+                    if (PieceCrosses(arc, a0, a1, p)) inside = !inside;
+                    a0 = a1;
+                    cut += Math.PI;
                 }
             }
         }
@@ -158,18 +159,17 @@ public sealed class Contour
         return x > p.X;
     }
 
-    /// <summary>Splits the arc's angle range at θ = π/2 + kπ, where y turns.</summary>
-    private static IEnumerable<(double From, double To)> MonotonePieces(ArcSegment arc)
+    /// <summary>Whether the ray from p towards +x crosses the y-monotone arc piece between angles a0 &lt; a1 (half-open in y).</summary>
+    private static bool PieceCrosses(ArcSegment arc, double a0, double a1, Point2 p)
     {
-        double a = arc.StartAngle, b = arc.EndAngle;
-        double lo = Math.Min(a, b), hi = Math.Max(a, b);
-        var cuts = new List<double> { lo };
-        double k = Math.Ceiling((lo - Math.PI / 2) / Math.PI);
-        for (double c = Math.PI / 2 + k * Math.PI; c < hi; c += Math.PI)
-            if (c > lo) cuts.Add(c);
-        cuts.Add(hi);
-        for (int i = 0; i + 1 < cuts.Count; i++)
-            if (cuts[i + 1] > cuts[i]) yield return (cuts[i], cuts[i + 1]);
+        double ya = arc.Center.Y + arc.Radius * Math.Sin(a0);
+        double yb = arc.Center.Y + arc.Radius * Math.Sin(a1);
+        if ((ya > p.Y) == (yb > p.Y)) return false;
+        // On a y-monotone piece cos θ keeps its sign, so the crossing lies on one side of the centre.
+        double side = Math.Cos(0.5 * (a0 + a1)) >= 0 ? 1 : -1;
+        double dy = p.Y - arc.Center.Y;
+        double x = arc.Center.X + side * Math.Sqrt(Math.Max(0, arc.Radius * arc.Radius - dy * dy));
+        return x > p.X;
     }
 
     private static BoundingBox SegmentBox(CurveSegment s)
