@@ -12,7 +12,9 @@ namespace Electrostat.Bench;
 /// <c>new FieldSolver(p).Solve()</c>. <c>extra_rhs_seconds</c> is the cost of one more right-hand side on the same
 /// matrix and hierarchy: the capacitance-matrix time divided by its two columns. Medians over the repeats.
 /// <c>peak_mb</c> is the process's peak resident set (VmHWM) during the case, reset before it via /proc/self/clear_refs.
-/// Options: <c>--cells 125,250,500,1001</c>, <c>--repeat 5</c>.
+/// After the structured sizes, one case on a mesh made by the project's mesher (<see cref="SolveBenchMeshedProblem"/>,
+/// mesh time excluded). Options: <c>--cells 125,250,500,1001</c>, <c>--repeat 5</c>, <c>--meshed-edge 2.8e-5</c>
+/// (max edge in metres of the meshed case; 0 skips it).
 /// </summary>
 internal sealed class SolveBench : IBenchSuite
 {
@@ -22,6 +24,7 @@ internal sealed class SolveBench : IBenchSuite
     {
         int[] cells = [125, 250, 500, 1001];
         int repeat = 5;
+        double meshedEdge = 2.8e-5;
         for (int i = 0; i + 1 < args.Length; i += 2)
         {
             switch (args[i])
@@ -32,15 +35,23 @@ internal sealed class SolveBench : IBenchSuite
                 case "--repeat":
                     repeat = int.Parse(args[i + 1], CultureInfo.InvariantCulture);
                     break;
+                case "--meshed-edge":
+                    meshedEdge = double.Parse(args[i + 1], CultureInfo.InvariantCulture);
+                    break;
                 default:
                     Console.Error.WriteLine($"solve: unknown option {args[i]}");
                     return 2;
             }
         }
         bool ok = true;
-        foreach (int m in cells)
+        var cases = cells.Select(m => ($"structured-two-plates-{m}", (Func<ElectrostaticProblem>)(() => SolveBenchProblem.Create(m)))).ToList();
+        if (meshedEdge > 0)
         {
-            var problem = SolveBenchProblem.Create(m);
+            cases.Add(($"meshed-two-electrodes-h{meshedEdge * 1e6:F0}um", () => SolveBenchMeshedProblem.Create(meshedEdge)));
+        }
+        foreach (var (name, create) in cases)
+        {
+            var problem = create();
             GC.Collect();
             ResetPeak();
             var first = new List<double>();
@@ -63,7 +74,7 @@ internal sealed class SolveBench : IBenchSuite
             }
             double peakMb = PeakMegabytes();
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"solve case=structured-two-plates-{m} unknowns={report!.Unknowns} iterations={report.Iterations} seconds={Median(first):F3} extra_rhs_seconds={Median(extra):F3} peak_mb={peakMb:F0} assembly_seconds={report.AssemblySeconds:F3} setup_seconds={report.PreconditionerSetupSeconds:F3} cg_seconds={report.SolveSeconds:F3} residual={report.RelativeResidual:E2} c11={cap:E6}"));
+                $"solve case={name} unknowns={report!.Unknowns} iterations={report.Iterations} seconds={Median(first):F3} extra_rhs_seconds={Median(extra):F3} peak_mb={peakMb:F0} assembly_seconds={report.AssemblySeconds:F3} setup_seconds={report.PreconditionerSetupSeconds:F3} cg_seconds={report.SolveSeconds:F3} residual={report.RelativeResidual:E2} c11={cap:E6}"));
         }
         return ok ? 0 : 1;
     }

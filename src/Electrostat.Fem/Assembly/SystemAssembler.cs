@@ -17,10 +17,33 @@ namespace Electrostat.Fem.Assembly;
 internal static class SystemAssembler
 {
     /// <summary>Assembles the reduced stiffness matrix (F or F/m) on all cores.</summary>
+    /// <remarks>
+    /// Triangles are visited in the order of their first vertex along the space-filling curve of the
+    /// <see cref="DofMap"/> (a counting sort, O(n)), so consecutive element scatters touch nearby matrix rows even
+    /// when the mesher emitted triangles in refinement order.
+    /// </remarks>
     public static CsrMatrix Matrix(CompiledProblem cp, DofMap map)
     {
-        var plan = CsrAssemblyPlan.Create(cp.Mesh.Triangles, 3, map.DofOfNode, map.DofCount);
-        return plan.Assemble(cp.ElementStiffness);
+        var tri = cp.Mesh.Triangles;
+        int nt = cp.Mesh.TriangleCount, nv = cp.Mesh.VertexCount;
+        var rank = new int[nv];
+        var spatial = map.SpatialOrder;
+        for (int k = 0; k < nv; k++) rank[spatial[k]] = k;
+        var start = new int[nv + 1];
+        for (int t = 0; t < nt; t++) start[rank[tri[3 * t]] + 1]++;
+        for (int k = 0; k < nv; k++) start[k + 1] += start[k];
+        var order = new int[nt];
+        for (int t = 0; t < nt; t++) order[start[rank[tri[3 * t]]]++] = t;
+        var connectivity = new int[3 * nt];
+        for (int k = 0; k < nt; k++)
+        {
+            int t = order[k];
+            connectivity[3 * k] = tri[3 * t];
+            connectivity[3 * k + 1] = tri[3 * t + 1];
+            connectivity[3 * k + 2] = tri[3 * t + 2];
+        }
+        var plan = CsrAssemblyPlan.Create(connectivity, 3, map.DofOfNode, map.DofCount);
+        return plan.Assemble((k, ke) => cp.ElementStiffness(order[k], ke));
     }
 
     /// <summary>
