@@ -21,6 +21,7 @@ public sealed class RefinableMesh
     private readonly MeshCore _core;
     private readonly PlanarGraph _graph;
     private MeshOptions _options;
+    private int _version;
 
     private RefinableMesh(MeshCore core, PlanarGraph graph, MeshOptions options)
     {
@@ -59,6 +60,7 @@ public sealed class RefinableMesh
     public void RefineTriangles(IEnumerable<int> triangles)
     {
         ArgumentNullException.ThrowIfNull(triangles);
+        _version++;
         _core.RefineTriangles(triangles);
     }
 
@@ -73,6 +75,7 @@ public sealed class RefinableMesh
         var old = _options.SizeFunction;
         Func<double, double, double> combined = old is null ? sizeFunction : (x, y) => Math.Min(old(x, y), sizeFunction(x, y));
         _options = _options with { SizeFunction = combined };
+        _version++;
         _core.ConfigureRefinement(_graph, _options, new SizeField(_graph, _options));
         _core.RefineAll();
     }
@@ -129,16 +132,12 @@ public sealed class RefinableMesh
             k++;
         }
         var mesh = new TriangleMesh(x, y, tri, reg, segV, segTag);
-        var skipped = new List<SkippedTriangle>();
-        Span<double> ang = stackalloc double[3];
-        double bound = _options.MinAngleDegrees;
-        for (int t = 0; t < nt; t++)
-        {
-            MeshQuality.TriangleAngles(mesh, t, ang);
-            double lo = Math.Min(ang[0], Math.Min(ang[1], ang[2]));
-            if (lo < bound) skipped.Add(new SkippedTriangle(t, lo, (SkipCause)c.TSkip[t]));
-        }
-        return new MeshResult(mesh, _graph, _options, vin, vseg, segIn, skipped, c.CheckTopology());
+        var below = new List<(int Triangle, double MinAngle)>();
+        var quality = MeshQuality.Of(mesh, _options.MinAngleDegrees, below);
+        var skipped = below.Select(b => new SkippedTriangle(b.Triangle, b.MinAngle, (SkipCause)c.TSkip[b.Triangle])).ToArray();
+        int version = _version;
+        return new MeshResult(mesh, _graph, _options, vin, vseg, segIn, skipped, quality,
+            () => version == _version ? c.CheckTopology() : null);
     }
 
     /// <summary>Counts of refinement steps that were skipped, by cause (diagnostics).</summary>

@@ -8,10 +8,10 @@ namespace Electrostat.Meshing.Output;
 /// </summary>
 public sealed class MeshResult
 {
-    private readonly string? _topologyError;
+    private readonly Func<string?> _topologyCheck;
 
     internal MeshResult(TriangleMesh mesh, PlanarGraph graph, MeshOptions options, int[] vertexInputVertex, int[] vertexInputSegment,
-        int[] segmentInputSegment, IReadOnlyList<SkippedTriangle> skipped, string? topologyError)
+        int[] segmentInputSegment, IReadOnlyList<SkippedTriangle> skipped, MeshQuality quality, Func<string?> topologyCheck)
     {
         Mesh = mesh;
         Graph = graph;
@@ -20,8 +20,8 @@ public sealed class MeshResult
         VertexInputSegment = vertexInputSegment;
         SegmentInputSegment = segmentInputSegment;
         SkippedTriangles = skipped;
-        Quality = MeshQuality.Of(mesh, options.MinAngleDegrees);
-        _topologyError = topologyError;
+        Quality = quality;
+        _topologyCheck = topologyCheck;
     }
 
     /// <summary>The mesh (vertices in metres, CCW triangles, regions, tagged constrained edges).</summary>
@@ -49,10 +49,13 @@ public sealed class MeshResult
     /// <summary>Quality statistics.</summary>
     public MeshQuality Quality { get; }
 
-    /// <summary>Checks every mesh invariant (see <see cref="MeshValidator"/>); optionally compares area per region attribute.</summary>
+    /// <summary>
+    /// Checks every mesh invariant (see <see cref="MeshValidator"/>) and the internal topology of the refinable mesh it
+    /// came from (unless that mesh has been refined since this export); optionally compares area per region attribute.
+    /// </summary>
     /// <param name="expectedRegionAreas">Expected area per region attribute, m²; null to skip the area check.</param>
     /// <param name="areaRelativeTolerance">Relative tolerance for the area check.</param>
     /// <returns>The report; <see cref="ValidationReport.IsValid"/> is true when all invariants hold.</returns>
     public ValidationReport Validate(IReadOnlyDictionary<int, double>? expectedRegionAreas = null, double areaRelativeTolerance = 1e-9) =>
-        MeshValidator.Validate(this, expectedRegionAreas, areaRelativeTolerance, _topologyError);
+        MeshValidator.Validate(this, expectedRegionAreas, areaRelativeTolerance, _topologyCheck());
 }
