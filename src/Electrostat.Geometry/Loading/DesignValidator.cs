@@ -229,6 +229,17 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
             }
         }
 
+        // A dielectric swallowed by conductors fills nothing (conductors win); say so rather than silently drop it.
+        foreach (var d in dielectrics)
+        {
+            NetTopologySuite.Geometries.Geometry rest = polys[d];
+            foreach (var c in conductors)
+                if (rest.EnvelopeInternal.Intersects(polys[c].EnvelopeInternal)) rest = rest.Difference(polys[c]);
+            if (rest.Area <= areaTol)
+                Sink.Warning(d.Token, $"dielectric \"{d.Name}\" lies entirely inside conductors and has no effect (conductors win over dielectrics)",
+                    "remove it or move it out of the conductor", NtsShapes.ToPoint(polys[d].InteriorPoint.Coordinate));
+        }
+
         // Dielectric overlaps (the later entry wins; a partial overlap is often a drawing slip).
         for (int i = 0; i < dielectrics.Count; i++)
         {

@@ -53,6 +53,7 @@ public class MalformedDesignTests
         ["partial-dielectric-overlap"] = new([("\"max\": [30, 30] } }", "\"max\": [30, 30] } },\n    { \"name\": \"slab\", \"material\": \"oil\", \"shape\": { \"type\": \"rectangle\", \"min\": [20, 25], \"max\": [40, 40] } }")], "dielectrics \"block\" and \"slab\" partly overlap", "{ \"name\": \"slab\"", true, ProblemSeverity.Warning),
         ["key-with-space-before-colon"] = new([("\"name\": \"gnd\", \"potential\": 0", "\"name\": \"gnd\", \"potential\" : 0, \"colour\" : \"r\\\"ed\"")], "unknown key \"colour\"", "\"colour\"", true),
         ["string-with-escape"] = new([("\"type\": \"circle\"", "\"type\": \"ci\\\"rcle\"")], "unknown shape type", "\"ci\\\"rcle\"", true),
+        ["dielectric-inside-conductor"] = new([("\"min\": [-30, 20], \"max\": [30, 30]", "\"min\": [-10, -8], \"max\": [10, -2]")], "lies entirely inside conductors", "{ \"name\": \"block\"", true, ProblemSeverity.Warning),
         ["unknown-shape-type"] = new([("\"type\": \"circle\"", "\"type\": \"circel\"")], "did you mean 'circle'?", "\"circel\"", true),
         ["potential-and-floating"] = new([("\"potential\": \"10 kV\"", "\"potential\": \"10 kV\", \"floating\": true")], "has both \"potential\" and \"floating\"", null, false),
         ["charge-on-fixed"] = new([("\"potential\": \"10 kV\"", "\"potential\": \"10 kV\", \"charge\": \"1 nC\"")], "\"charge\" is only allowed on a floating conductor", null, false),
