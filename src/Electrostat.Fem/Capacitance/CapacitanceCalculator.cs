@@ -40,7 +40,7 @@ internal static class CapacitanceCalculator
             var q = SystemAssembler.TerminalCharges(cp, phi, includeVolumeCharge: false);
             for (int i = 0; i < n; i++) raw[i, j] = q[i];
             double w = SystemAssembler.Energy(cp, phi);
-            energyMismatch = Math.Max(energyMismatch, Math.Abs(2 * w - q[j]) / Math.Abs(q[j]));
+            energyMismatch = Math.Max(energyMismatch, q[j] != 0 ? Math.Abs(2 * w - q[j]) / Math.Abs(q[j]) : (w == 0 ? 0 : double.PositiveInfinity));
             reports.Add(report with { SolveSeconds = report.SolveSeconds + sw.Elapsed.TotalSeconds });
         }
 
@@ -61,6 +61,13 @@ internal static class CapacitanceCalculator
         var dense = Matrix<double>.Build.DenseOfArray(maxwell);
         var eig = dense.Evd(MathNet.Numerics.LinearAlgebra.Symmetricity.Symmetric).EigenValues.Select(z => z.Real).Order().ToArray();
         var violations = Check(maxwell, names, eig, maxDiag, cp.HasEnclosure || (cp.InfinityNode >= 0 && cp.Symmetry == Problem.Symmetry.Axisymmetric));
+        for (int j = 0; j < n; j++)
+        {
+            if (!reports[j].Converged)
+            {
+                violations.Insert(0, string.Format(CultureInfo.InvariantCulture, "The solve for column {0} ('{1}') did not converge (relative residual {2:E2} after {3} iterations); the matrix is not trustworthy.", j, names[j], reports[j].RelativeResidual, reports[j].Iterations));
+            }
+        }
         var reduced = Reduce(cp, maxwell, names);
         return new CapacitanceMatrixResult(cp.Symmetry, cp.Problem.DepthMetres, names, raw, maxwell, symmetryError, energyMismatch, reports, reduced, eig, violations);
     }

@@ -75,7 +75,7 @@ public sealed class CapacitanceMatrixResult
     /// <summary>Failed physics checks, one readable sentence each; empty when all pass.</summary>
     public IReadOnlyList<string> Violations { get; }
 
-    /// <summary>True when the diagonal is positive, off-diagonals non-positive, row sums non-negative and the matrix positive definite (within tolerance).</summary>
+    /// <summary>True when every column solve converged and the diagonal is positive, off-diagonals non-positive, row sums non-negative and the matrix positive definite (within tolerance).</summary>
     public bool PassesPhysicsChecks => Violations.Count == 0;
 
     /// <summary>Mutual capacitance −C_ij between conductors i ≠ j (F/m planar, F axisymmetric).</summary>

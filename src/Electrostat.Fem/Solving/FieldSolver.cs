@@ -13,7 +13,8 @@ namespace Electrostat.Fem.Solving;
 /// <remarks>
 /// Each assembled matrix and its preconditioner are kept and reused: the capacitance columns share one, and when the
 /// design has no floating conductor the design solve shares it too. Nothing is solved behind the caller's back; each
-/// call solves exactly what it says.
+/// call solves exactly what it says. An instance is not thread-safe (the preconditioner keeps work vectors); use one
+/// solver per thread.
 /// </remarks>
 public sealed class FieldSolver
 {
