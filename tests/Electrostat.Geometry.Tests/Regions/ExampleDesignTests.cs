@@ -115,6 +115,12 @@ public class ExampleDesignTests
         Assert.Equal(0.5 * Math.PI * (400 - 25) * 1e-6, spheres.Enclosure.Shape.Area - spheres.Conductors[0].Shape.Area, 1e-15);
         Assert.Single(spheres.Enclosure.Shape.Outer.Segments, s => s.Marker == BoundaryMarker.Axis);
         Assert.Equal(1.0, spheres.BackgroundMaterial.RelativePermittivity);
+        var plates = Load(Path.Combine("validation", "layered-plate-capacitor.json"));
+        Assert.Equal(3, plates.Enclosure.Shape.Outer.Segments.Count(s => s.Marker == BoundaryMarker.SymmetryPlane));
+        var wall = Assert.Single(plates.Enclosure.Shape.Outer.Segments, s => s.Marker == BoundaryMarker.None);
+        Assert.Equal(0, wall.Start.Y);
+        Assert.Equal(0, wall.End.Y);
+        Assert.False(plates.Electrodes[0].TouchesEnclosure); // touching mirror planes is not touching the wall
     }
 
     [Fact]
