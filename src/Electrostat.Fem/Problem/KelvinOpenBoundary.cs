@@ -13,7 +13,9 @@ namespace Electrostat.Fem.Problem;
 /// centre maps to distance ρ' = R²/ρ from the exterior centre along the same direction; the circle maps to itself and
 /// infinity maps to the exterior centre, which must be a mesh vertex.</para>
 /// <para>Both arcs must carry the same vertices at the same angles (mesh them as protected segments); each matched
-/// pair is merged into one degree of freedom.</para>
+/// pair is merged into one degree of freedom. Give the exterior region, in <see cref="ElectrostaticProblem.Materials"/>,
+/// the material of the space outside the circle (usually vacuum, without volume charge); the arc tags need no entry in
+/// <see cref="ElectrostaticProblem.Boundaries"/>.</para>
 /// <para>Permittivity of the exterior image. The energy ½∫ε|∇φ|²dV is kept. The inversion is conformal with length
 /// scale λ = R²/ρ'² (|dx| = λ|dx'|), so |∇φ|² = |∇'φ|²/λ² and, per unit length of a 2D slice, dA = λ²dA': in the
 /// planar case the two factors cancel and the image carries the same ε (Laplace's equation is conformally invariant
