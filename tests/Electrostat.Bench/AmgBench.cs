@@ -74,11 +74,14 @@ internal sealed class AmgBench : IBenchSuite
             var setup = new List<double>();
             var solve = new List<double>();
             var extra = new List<double>();
+            var cpu = new List<double>();
             int iterations = 0, extraIterations = 0;
             string hierarchy = "";
             for (int r = 0; r < repeat; r++)
             {
                 GC.Collect();
+                var process = Process.GetCurrentProcess();
+                var cpuStart = process.TotalProcessorTime;
                 var clock = Stopwatch.StartNew();
                 // Optional: number the dofs in reverse Cuthill-McKee order first (counted as assembly time).
                 var dofOfNode = renumber ? DofOrdering.ReverseCuthillMcKee(problem.Triangles, 3, problem.DofOfNode, problem.DofCount) : problem.DofOfNode;
@@ -93,6 +96,8 @@ internal sealed class AmgBench : IBenchSuite
                 var rhs2 = renumber ? Renumbered(b2, problem.DofOfNode, dofOfNode) : b2;
                 var report = ConjugateGradient.Solve(a, rhs1, x, amg, options);
                 solve.Add(report.Seconds);
+                process.Refresh();
+                cpu.Add((process.TotalProcessorTime - cpuStart).TotalSeconds);
                 var x2 = new double[problem.DofCount];
                 var report2 = ConjugateGradient.Solve(a, rhs2, x2, amg, options);
                 extra.Add(report2.Seconds);
@@ -104,9 +109,22 @@ internal sealed class AmgBench : IBenchSuite
             double peakMb = Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024.0);
             double asm = Median(assembly), set = Median(setup), sol = Median(solve), ext = Median(extra);
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"amg case=p1-square-{m}{(shuffle ? "-shuffled" : "")}{(renumber ? "-rcm" : "")} unknowns={problem.DofCount} iterations={iterations} setup_seconds={set:F3} solve_seconds={sol:F3} extra_rhs_seconds={ext:F3} peak_mb={peakMb:F0} assembly_seconds={asm:F3} total_seconds={asm + set + sol:F3} extra_rhs_iterations={extraIterations} {hierarchy}"));
+                $"amg case=p1-square-{m}{(shuffle ? "-shuffled" : "")}{(renumber ? "-rcm" : "")} unknowns={problem.DofCount} iterations={iterations} setup_seconds={set:F3} solve_seconds={sol:F3} extra_rhs_seconds={ext:F3} peak_mb={peakMb:F0} assembly_seconds={asm:F3} total_seconds={asm + set + sol:F3} cpu_seconds={Median(cpu):F3} load={Environment.ProcessorCount}cpu/{LoadAverage()} extra_rhs_iterations={extraIterations} {hierarchy}"));
         }
         return allConverged ? 0 : 1;
+    }
+
+    /// <summary>The 1-minute load average (Linux), to show whether other processes shared the cores.</summary>
+    private static string LoadAverage()
+    {
+        try
+        {
+            return File.ReadAllText("/proc/loadavg").Split(' ')[0];
+        }
+        catch (IOException)
+        {
+            return "unknown";
+        }
     }
 
     private static double[] Renumbered(double[] b, int[] oldMap, int[] newMap)

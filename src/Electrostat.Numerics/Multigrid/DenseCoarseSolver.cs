@@ -25,6 +25,16 @@ internal sealed class DenseCoarseSolver
         try
         {
             var factor = dense.Cholesky().Factor;
+            // A semidefinite matrix (floating problem: constants in the kernel) can pass the factorisation with a
+            // rounding-level pivot; a pivot below 1e-10 of the largest diagonal entry is treated as singular.
+            double maxDiagonal = dense.Diagonal().Maximum();
+            for (int i = 0; i < _n; i++)
+            {
+                if (factor[i, i] * factor[i, i] < 1e-10 * maxDiagonal)
+                {
+                    throw new ArgumentException("Numerically singular coarsest matrix.");
+                }
+            }
             _lower = new double[_n * _n];
             for (int i = 0; i < _n; i++)
             {

@@ -100,7 +100,7 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
                 rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(a, diagonal, work.Residual, work.Solution, options.SpectralRadiusIterations));
             }
             double omega = options.ProlongatorDamping / rho;
-            var p = Prolongator.Build(a, diagonal, agg, aggregates, nullSpace, omega, out nullSpace);
+            var p = Prolongator.Build(a, diagonal, agg, aggregates, nullSpace, omega, theta, out nullSpace);
             var r = p.Transpose();
             var coarse = GalerkinProduct.Compute(r, a, p);
             var packedP = new PackedCsr(p);
