@@ -11,7 +11,7 @@ namespace Electrostat.Meshing;
 /// </remarks>
 public sealed record MeshOptions
 {
-    /// <summary>Minimum angle bound in degrees (default 28; accepted range 0 to 34).</summary>
+    /// <summary>Minimum angle bound in degrees (default 28; accepted range 0 to 33.5).</summary>
     public double MinAngleDegrees { get; init; } = 28.0;
 
     /// <summary>Largest allowed edge length anywhere, metres; null for no global limit.</summary>
@@ -40,8 +40,10 @@ public sealed record MeshOptions
     /// <summary>Checks the values and throws <see cref="ArgumentException"/> with the fix if one is out of range.</summary>
     public void Check()
     {
-        if (!(MinAngleDegrees >= 0 && MinAngleDegrees <= 34))
-            throw new ArgumentException($"Minimum angle {MinAngleDegrees}° is out of range; use 0 to 34 degrees (28 is the default; above about 34 refinement may not terminate).");
+        // 33.5° is the largest bound at which our randomized stress runs (600 random polygons with holes, 1e-6 to 1e3 m)
+        // always terminated; at 34° some ran away until the triangle budget stopped them.
+        if (!(MinAngleDegrees >= 0 && MinAngleDegrees <= 33.5))
+            throw new ArgumentException($"Minimum angle {MinAngleDegrees}° is out of range; use 0 to 33.5 degrees (28 is the default; above about 33.5 Delaunay refinement may not terminate).");
         if (MaxEdgeLengthMetres is { } h && !(h > 0 && double.IsFinite(h)))
             throw new ArgumentException($"Maximum edge length {h} m must be positive and finite.");
         if (GradingRatio is { } g && !(g > 1 && double.IsFinite(g)))

@@ -59,6 +59,30 @@ public class PropertyTests
     }
 
     [Fact]
+    public void HighestAllowedBound_Terminates_ValidAndBounded()
+    {
+        // 33.5° is above what Ruppert's proof covers (about 20.7°); termination here is an observed property that the
+        // skip rules and off-centres must keep. A budget far above the expected size turns a runaway into a failure.
+        var gen = Gen.Select(Gen.Double[0, 1].Array[8, 25], Gen.Double[0.6, 1.0].Array[25], Gen.Double[0, 1].Array[4, 9], Gen.Double[0.1, 0.3].Array[9]);
+        gen.Sample((ang, rad, hang, hrad) =>
+        {
+            var g = new PlanarGraph();
+            g.AddPolygon(Star(0, 0, ang, rad), 1);
+            g.AddPolygon(Star(0, 0, hang, hrad), 2);
+            g.AddHole(0, 0);
+            var r = Mesher.Generate(g, new MeshOptions { MinAngleDegrees = 33.5, MaxEdgeLengthMetres = 0.1, MaxTriangles = 200_000 });
+            AssertGood(r);
+            return r.SkippedTriangles.Count == r.Quality.BelowBoundCount;
+        }, iter: 20);
+    }
+
+    [Fact]
+    public void AngleBoundAbove33_5_Rejected()
+    {
+        Assert.Throws<ArgumentException>(() => Mesher.Generate(TestGraphs.SquareWithHole(), new MeshOptions { MinAngleDegrees = 34 }));
+    }
+
+    [Fact]
     public void CocircularPoints_ValidAndFullBound()
     {
         // Regular polygons: all vertices (nearly) on one circle, the classic degenerate Delaunay input.
