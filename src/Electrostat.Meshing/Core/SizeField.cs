@@ -13,8 +13,7 @@ namespace Electrostat.Meshing.Core;
 /// a uniform background grid, initialised exactly near each vertex and propagated by a two-pass chamfer distance
 /// transform (Borgefors 1986, "Distance transformations in digital images"), then read by bilinear interpolation.
 /// The chamfer distance overestimates Euclidean distance by at most about 8%, so grading is slightly gentler than
-/// requested, never steeper. For very large inputs (more than 4e7 vertex-segment pairs) lfs(v) falls back to the
-/// length of the shortest segment at v.
+/// requested, never steeper.
 /// </remarks>
 internal sealed class SizeField
 {
@@ -146,42 +145,103 @@ internal sealed class SizeField
         return grid;
     }
 
-    /// <summary>lfs at each input vertex: distance to the nearest other vertex or non-incident segment, metres.</summary>
+    /// <summary>
+    /// lfs at each input vertex: distance to the nearest other vertex or non-incident segment, metres. Uses a uniform
+    /// bucket grid (about one vertex per cell) and searches rings of cells outwards until the ring is farther than
+    /// the best distance found, so the cost is near-linear for evenly spread inputs.
+    /// </summary>
     internal static double[] LocalFeatureSizes(PlanarGraph graph)
     {
         int n = graph.VertexCount, m = graph.Segments.Count;
         var lfs = new double[n];
         Array.Fill(lfs, double.PositiveInfinity);
-        foreach (var s in graph.Segments)
-        {
-            double len = Math.Sqrt(Sq(graph.X[s.A] - graph.X[s.B]) + Sq(graph.Y[s.A] - graph.Y[s.B]));
-            lfs[s.A] = Math.Min(lfs[s.A], len);
-            lfs[s.B] = Math.Min(lfs[s.B], len);
-        }
-        if ((double)n * (n + m) > 4e7) return FillIsolated(lfs);
         var xs = graph.X.ToArray();
         var ys = graph.Y.ToArray();
+        var sa = new int[m];
+        var sb = new int[m];
+        for (int s = 0; s < m; s++)
+        {
+            sa[s] = graph.Segments[s].A;
+            sb[s] = graph.Segments[s].B;
+            double len = Math.Sqrt(Sq(xs[sa[s]] - xs[sb[s]]) + Sq(ys[sa[s]] - ys[sb[s]]));
+            lfs[sa[s]] = Math.Min(lfs[sa[s]], len);
+            lfs[sb[s]] = Math.Min(lfs[sb[s]], len);
+        }
+        if (n < 2) return FillIsolated(lfs);
+        double minX = xs.Min(), maxX = xs.Max(), minY = ys.Min(), maxY = ys.Max();
+        double span = Math.Max(maxX - minX, maxY - minY);
+        if (!(span > 0)) return FillIsolated(lfs);
+        int side = Math.Clamp((int)Math.Sqrt(n), 1, 2048);
+        double cell = span / side * (1 + 1e-9);
+        int nx = Math.Max(1, (int)((maxX - minX) / cell) + 1), ny = Math.Max(1, (int)((maxY - minY) / cell) + 1);
+        int Cx(double x) => Math.Clamp((int)((x - minX) / cell), 0, nx - 1);
+        int Cy(double y) => Math.Clamp((int)((y - minY) / cell), 0, ny - 1);
+
+        // Compressed bucket lists: vertices by their cell, segments by every cell their bounding box touches.
+        var vStart = new int[nx * ny + 1];
+        for (int v = 0; v < n; v++) vStart[Cy(ys[v]) * nx + Cx(xs[v]) + 1]++;
+        for (int k = 0; k < nx * ny; k++) vStart[k + 1] += vStart[k];
+        var vItems = new int[n];
+        var fill = (int[])vStart.Clone();
+        for (int v = 0; v < n; v++) vItems[fill[Cy(ys[v]) * nx + Cx(xs[v])]++] = v;
+        var sStart = new int[nx * ny + 1];
+        void ForCells(int s, Action<int> act)
+        {
+            int x0 = Cx(Math.Min(xs[sa[s]], xs[sb[s]])), x1 = Cx(Math.Max(xs[sa[s]], xs[sb[s]]));
+            int y0 = Cy(Math.Min(ys[sa[s]], ys[sb[s]])), y1 = Cy(Math.Max(ys[sa[s]], ys[sb[s]]));
+            for (int j = y0; j <= y1; j++) for (int i = x0; i <= x1; i++) act(j * nx + i);
+        }
+        for (int s = 0; s < m; s++) ForCells(s, k => sStart[k + 1]++);
+        for (int k = 0; k < nx * ny; k++) sStart[k + 1] += sStart[k];
+        var sItems = new int[sStart[nx * ny]];
+        var sFill = (int[])sStart.Clone();
+        for (int s = 0; s < m; s++) { int ss = s; ForCells(s, k => sItems[sFill[k]++] = ss); }
+
+        var seen = new int[m];
+        int stamp = 0;
         for (int v = 0; v < n; v++)
         {
             double x = xs[v], y = ys[v];
-            double best = lfs[v] * lfs[v];
-            for (int w = 0; w < n; w++)
+            double best2 = lfs[v] * lfs[v];
+            int ci = Cx(x), cj = Cy(y);
+            stamp++;
+            int maxRing = Math.Max(nx, ny);
+            for (int r = 0; r <= maxRing; r++)
             {
-                if (w == v) continue;
-                double d2 = Sq(xs[w] - x) + Sq(ys[w] - y);
-                if (d2 < best) best = d2;
+                // Everything within distance r·cell of v lies in rings 0..r, so stop once that covers the best.
+                if (r > 0 && Sq((r - 1) * cell) >= best2) break;
+                for (int j = cj - r; j <= cj + r; j++)
+                {
+                    if (j < 0 || j >= ny) continue;
+                    bool edgeRow = j == cj - r || j == cj + r;
+                    for (int i = ci - r; i <= ci + r; i += edgeRow ? 1 : 2 * r)
+                    {
+                        if (i >= 0 && i < nx)
+                        {
+                            int k = j * nx + i;
+                            for (int q = vStart[k]; q < vStart[k + 1]; q++)
+                            {
+                                int w = vItems[q];
+                                if (w == v) continue;
+                                double d2 = Sq(xs[w] - x) + Sq(ys[w] - y);
+                                if (d2 < best2) best2 = d2;
+                            }
+                            for (int q = sStart[k]; q < sStart[k + 1]; q++)
+                            {
+                                int s = sItems[q];
+                                if (seen[s] == stamp || sa[s] == v || sb[s] == v) continue;
+                                seen[s] = stamp;
+                                double ax = xs[sa[s]], ay = ys[sa[s]], dx = xs[sb[s]] - ax, dy = ys[sb[s]] - ay;
+                                double t = Math.Clamp(((x - ax) * dx + (y - ay) * dy) / (dx * dx + dy * dy), 0, 1);
+                                double d2 = Sq(ax + t * dx - x) + Sq(ay + t * dy - y);
+                                if (d2 < best2) best2 = d2;
+                            }
+                        }
+                        if (r == 0) break;
+                    }
+                }
             }
-            foreach (var s in graph.Segments)
-            {
-                if (s.A == v || s.B == v) continue;
-                double ax = xs[s.A], ay = ys[s.A], bx = xs[s.B], by = ys[s.B];
-                double dx = bx - ax, dy = by - ay;
-                double t = ((x - ax) * dx + (y - ay) * dy) / (dx * dx + dy * dy);
-                t = Math.Clamp(t, 0, 1);
-                double d2 = Sq(ax + t * dx - x) + Sq(ay + t * dy - y);
-                if (d2 < best) best = d2;
-            }
-            lfs[v] = Math.Sqrt(best);
+            lfs[v] = Math.Sqrt(best2);
         }
         return FillIsolated(lfs);
     }
