@@ -139,17 +139,28 @@ internal sealed class DofMap
             minY = Math.Min(minY, y[i]); maxY = Math.Max(maxY, y[i]);
         }
         double scale = (1 << 20) / Math.Max(Math.Max(maxX - minX, maxY - minY), double.Epsilon);
-        var keys = new long[n];
+        var keys = new ulong[n];
         for (int i = 0; i < n; i++)
         {
             uint qx = (uint)Math.Min((1 << 20) - 1, (x[i] - minX) * scale);
             uint qy = (uint)Math.Min((1 << 20) - 1, (y[i] - minY) * scale);
-            // Key = interleaved bits (y in odd positions, 40 bits), then the vertex index to break ties, so the
-            // order is a strict total order (n < 2^23 keeps the product below 2^63).
-            long morton = (long)(Spread(qx) | (Spread(qy) << 1));
-            keys[i] = n < (1 << 23) ? morton * n + i : morton;
+            keys[i] = Spread(qx) | (Spread(qy) << 1); // 40-bit Morton key, y in the odd bits
         }
-        Array.Sort(keys, order);
+        // LSD radix sort, 8 bits per pass: O(n) and stable, so equal keys keep the vertex order (deterministic).
+        var tmpOrder = new int[n];
+        var count = new int[257];
+        for (int shift = 0; shift < 40; shift += 8)
+        {
+            Array.Clear(count);
+            for (int k = 0; k < n; k++) count[(int)((keys[order[k]] >> shift) & 0xFF) + 1]++;
+            for (int b = 0; b < 256; b++) count[b + 1] += count[b];
+            for (int k = 0; k < n; k++)
+            {
+                int v = order[k];
+                tmpOrder[count[(int)((keys[v] >> shift) & 0xFF)]++] = v;
+            }
+            (order, tmpOrder) = (tmpOrder, order);
+        }
         return order;
     }
 
