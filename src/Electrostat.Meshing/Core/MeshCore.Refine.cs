@@ -105,7 +105,7 @@ internal sealed partial class MeshCore
             {
                 _forcedCount -= 2;
                 int ft = _forced[_forcedCount], fs = _forced[_forcedCount + 1];
-                if (TStamp[ft] == fs) SplitTriangle(ft);
+                if (TStamp[ft] == fs) SplitTriangle(ft, forced: true);
                 continue;
             }
             if (!_bad.TryPop(out int t, out int stamp)) break;
@@ -118,7 +118,7 @@ internal sealed partial class MeshCore
                 SkipSmallAngle++;
                 continue;
             }
-            SplitTriangle(t);
+            SplitTriangle(t, forced: false);
         }
     }
 
@@ -218,7 +218,9 @@ internal sealed partial class MeshCore
 
     private double Len2(int a, int b) => (X[a] - X[b]) * (X[a] - X[b]) + (Y[a] - Y[b]) * (Y[a] - Y[b]);
 
-    private void SplitTriangle(int t)
+    /// <summary>Splits triangle t; when its point is rejected for encroachment, the subsegments are split and t is
+    /// queued again (in the forced queue if <paramref name="forced"/>, so a requested split is not forgotten).</summary>
+    private void SplitTriangle(int t, bool forced)
     {
         int b = 3 * t;
         int va = TV[b], vb = TV[b + 1], vc = TV[b + 2];
@@ -252,7 +254,7 @@ internal sealed partial class MeshCore
             if (seg < 0) { TSkip[t] = SkipReason.Degenerate; SkipDegenerate++; return; }
             if (_segProtected[seg]) { TSkip[t] = SkipReason.ProtectedSegment; SkipProtected++; return; }
             if (!SplitSubsegment(blocked)) { TSkip[t] = SkipReason.TinyFeature; return; }
-            _bad.Push(t, TStamp[t], 0);
+            Requeue(t, forced);
             return;
         }
         bool starShaped = FindCavity(px, py, lt, -1, -1, -1);
@@ -281,7 +283,7 @@ internal sealed partial class MeshCore
                 if (code < 0 || TS[code] != enc[k + 2]) continue;
                 if (SplitSubsegment(code)) split = true;
             }
-            if (split) _bad.Push(t, TStamp[t], 0);
+            if (split) Requeue(t, forced);
             else
             {
                 TSkip[t] = reason;
@@ -293,6 +295,18 @@ internal sealed partial class MeshCore
         int p = AddVertex(px, py, KindFree, -1);
         CommitCavity(p, -1, -1, -1);
         AfterInsert();
+    }
+
+    private void Requeue(int t, bool forced)
+    {
+        if (!forced)
+        {
+            _bad.Push(t, TStamp[t], 0);
+            return;
+        }
+        if (_forcedCount + 2 > _forced.Length) Array.Resize(ref _forced, _forced.Length * 2);
+        _forced[_forcedCount++] = t;
+        _forced[_forcedCount++] = TStamp[t];
     }
 
     /// <summary>Splits the subsegment at edge <paramref name="code"/>; false if it is protected or too short.</summary>
