@@ -12,6 +12,9 @@ namespace Electrostat.Bench;
 /// <c>new FieldSolver(p).Solve()</c>. <c>extra_rhs_seconds</c> is the cost of one more right-hand side on the same
 /// matrix and hierarchy: the capacitance-matrix time divided by its two columns. Medians over the repeats.
 /// <c>peak_mb</c> is the process's peak resident set (VmHWM) during the case, reset before it via /proc/self/clear_refs.
+/// Extra fields after the required ones: <c>cpu_seconds</c> (process CPU time of the first solve, all threads: on a
+/// shared machine the wall time can be several times this) and <c>load_average</c> (1-minute load at the end of the case),
+/// then the breakdown of the last repeat.
 /// After the structured sizes, one case on a mesh made by the project's mesher (<see cref="SolveBenchMeshedProblem"/>,
 /// mesh time excluded). Options: <c>--cells 125,250,500,1001</c>, <c>--repeat 5</c>, <c>--meshed-edge 2.8e-5</c>
 /// (max edge in metres of the meshed case; 0 skips it).
@@ -55,16 +58,21 @@ internal sealed class SolveBench : IBenchSuite
             GC.Collect();
             ResetPeak();
             var first = new List<double>();
+            var firstCpu = new List<double>();
             var extra = new List<double>();
             SolveReport? report = null;
             double cap = 0;
             for (int r = 0; r < repeat; r++)
             {
                 GC.Collect();
+                var process = Process.GetCurrentProcess();
+                var cpu0 = process.TotalProcessorTime;
                 var clock = Stopwatch.StartNew();
                 var solver = new FieldSolver(problem);
                 var sol = solver.Solve();
                 first.Add(clock.Elapsed.TotalSeconds);
+                process.Refresh();
+                firstCpu.Add((process.TotalProcessorTime - cpu0).TotalSeconds);
                 clock.Restart();
                 var cm = solver.ComputeCapacitanceMatrix();
                 extra.Add(clock.Elapsed.TotalSeconds / cm.Count);
@@ -74,7 +82,7 @@ internal sealed class SolveBench : IBenchSuite
             }
             double peakMb = PeakMegabytes();
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"solve case={name} unknowns={report!.Unknowns} iterations={report.Iterations} seconds={Median(first):F3} extra_rhs_seconds={Median(extra):F3} peak_mb={peakMb:F0} assembly_seconds={report.AssemblySeconds:F3} setup_seconds={report.PreconditionerSetupSeconds:F3} cg_seconds={report.SolveSeconds:F3} residual={report.RelativeResidual:E2} c11={cap:E6}"));
+                $"solve case={name} unknowns={report!.Unknowns} iterations={report.Iterations} seconds={Median(first):F3} extra_rhs_seconds={Median(extra):F3} peak_mb={peakMb:F0} cpu_seconds={Median(firstCpu):F3} load_average={LoadAverage()} assembly_seconds={report.AssemblySeconds:F3} setup_seconds={report.PreconditionerSetupSeconds:F3} cg_seconds={report.SolveSeconds:F3} residual={report.RelativeResidual:E2} c11={cap:E6}"));
         }
         return ok ? 0 : 1;
     }
@@ -110,6 +118,19 @@ internal sealed class SolveBench : IBenchSuite
         {
         }
         return Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024.0);
+    }
+
+    /// <summary>The 1-minute load average (Linux), to tell a contended machine from a slow solver.</summary>
+    private static string LoadAverage()
+    {
+        try
+        {
+            return File.ReadAllText("/proc/loadavg").Split(' ')[0];
+        }
+        catch (IOException)
+        {
+            return "na";
+        }
     }
 
     private static double Median(List<double> values)
