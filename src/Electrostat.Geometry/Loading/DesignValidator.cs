@@ -127,6 +127,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
     {
         bool axisymmetric = ctx.Symmetry == Symmetry.Axisymmetric;
         var enclosurePoly = NtsShapes.ToPolygon(enclosure.Shape, _chord);
+        var enclosurePrepared = NetTopologySuite.Geometries.Prepared.PreparedGeometryFactory.Prepare(enclosurePoly);
         double areaTol = _touch * _touch;
         bool ok = true;
 
@@ -145,6 +146,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
                 ok = false;
                 continue;
             }
+            if (enclosurePrepared.Covers(poly)) continue;
             var outside = poly.Difference(enclosurePoly);
             if (outside.Area > areaTol)
             {
@@ -165,6 +167,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
                 return (LineString)NtsShapes.Factory.CreateLineString(pts.Select(p => new Coordinate(p.X, p.Y)).ToArray());
             }).ToArray();
         var wall = NtsShapes.Factory.CreateMultiLineString(wallLines);
+        var wallIndex = new IndexedFacetDistance(wall); // indexed: the naive distance is quadratic in vertex count
 
         // Union-find of touching conductors that may be joined.
         int n = conductors.Count;
@@ -176,10 +179,9 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
             var a = conductors[i];
             if (wallLines.Length > 0)
             {
-                var d = new DistanceOp(polys[a], wall);
-                if (d.Distance() <= _touch)
+                if (wallIndex.IsWithinDistance(polys[a], _touch))
                 {
-                    var at = NtsShapes.ToPoint(d.NearestPoints()[0]);
+                    var at = NtsShapes.ToPoint(wallIndex.NearestPoints(polys[a])[0]);
                     if (a.PotentialVolts is null)
                     {
                         Sink.Error(a.Token, $"floating conductor \"{a.Name}\" touches the enclosure, which is held at {UnitTable.Format(enclosure.PotentialVolts, QuantityKind.Potential)}",
@@ -202,11 +204,12 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
             for (int j = 0; j < i; j++)
             {
                 var b = conductors[j];
-                var op = new DistanceOp(polys[a], polys[b]);
-                if (op.Distance() > _touch) continue;
-                var intersection = polys[a].Intersection(polys[b]);
-                bool overlap = intersection.Area > areaTol;
-                var at = NtsShapes.ToPoint(overlap ? intersection.InteriorPoint.Coordinate : op.NearestPoints()[0]);
+                if (polys[a].EnvelopeInternal.Distance(polys[b].EnvelopeInternal) > _touch) continue;
+                bool intersects = polys[a].Intersects(polys[b]);
+                if (!intersects && !IndexedFacetDistance.IsWithinDistance(polys[a], polys[b], _touch)) continue;
+                var intersection = intersects ? polys[a].Intersection(polys[b]) : null;
+                bool overlap = intersection is not null && intersection.Area > areaTol;
+                var at = NtsShapes.ToPoint(overlap ? intersection!.InteriorPoint.Coordinate : IndexedFacetDistance.NearestPoints(polys[a], polys[b])[0]);
                 string how = overlap ? "overlap" : "touch";
                 if (a.PotentialVolts is null != b.PotentialVolts is null)
                 {

@@ -53,7 +53,8 @@ internal sealed class ShapeReader(ReadContext ctx)
                 return null;
         }
         if (outer is null) return null;
-        if (!CheckOutline(outer, obj, what)) return null;
+        // Circles and rectangles are simple by construction; only free outlines need the crossing test.
+        if (!CheckOutline(outer, obj, what, checkCrossings: type is "polygon" or "path")) return null;
 
         var holes = new List<Contour>();
         var holesToken = obj["holes"];
@@ -277,21 +278,27 @@ internal sealed class ShapeReader(ReadContext ctx)
     }
 
     /// <summary>Zero area and self-intersection checks on one outline.</summary>
-    private bool CheckOutline(Contour contour, JObject obj, string what)
+    private bool CheckOutline(Contour contour, JObject obj, string what, bool checkCrossings)
     {
         double diag = contour.Bounds.Diagonal;
+        if (checkCrossings && !CheckCrossings(contour, obj, what, diag)) return false;
+        if (contour.Area <= 1e-9 * diag * diag)
+        {
+            Sink.Error(obj, $"{what} encloses zero area", "spread the points so the outline encloses a region",
+                new Point2(contour.Bounds.MinX, contour.Bounds.MinY));
+            return false;
+        }
+        return true;
+    }
+
+    private bool CheckCrossings(Contour contour, JObject obj, string what, double diag)
+    {
         var ring = NtsShapes.ToRing(contour, 1e-7 * diag);
         var bad = IsSimpleOp.GetNonSimpleLocation(ring);
         if (bad is not null)
         {
             Sink.Error(obj, $"{what} outline crosses itself", "reorder or move the points so the outline does not cross itself",
                 NtsShapes.ToPoint(bad));
-            return false;
-        }
-        if (contour.Area <= 1e-9 * diag * diag)
-        {
-            Sink.Error(obj, $"{what} encloses zero area", "spread the points so the outline encloses a region",
-                new Point2(contour.Bounds.MinX, contour.Bounds.MinY));
             return false;
         }
         return true;

@@ -86,8 +86,15 @@ public sealed class RegionModel
     /// </summary>
     public (double DistanceMetres, Point2 OnA, Point2 OnB) ConductorClearance(int conductorA, int conductorB)
     {
-        var op = new DistanceOp(_conductors[conductorA], _conductors[conductorB]);
-        var pts = op.NearestPoints();
-        return (op.Distance(), NtsShapes.ToPoint(pts[0]), NtsShapes.ToPoint(pts[1]));
+        var a = _conductors[conductorA];
+        var b = _conductors[conductorB];
+        if (a.Intersects(b))
+        {
+            var p = NtsShapes.ToPoint(a.Intersection(b).InteriorPoint.Coordinate);
+            return (0, p, p);
+        }
+        // Indexed facet distance: the naive polygon distance is quadratic in the vertex count of finely flattened arcs.
+        var pts = IndexedFacetDistance.NearestPoints(a, b);
+        return (pts[0].Distance(pts[1]), NtsShapes.ToPoint(pts[0]), NtsShapes.ToPoint(pts[1]));
     }
 }
