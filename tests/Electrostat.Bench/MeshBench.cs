@@ -31,9 +31,12 @@ internal sealed class MeshBench : IBenchSuite
         if (args.Length >= 2 && args[0] == "--child") return RunChild(args[1]);
         var names = args.Length > 0 ? args : Cases.Select(c => c.Name).ToArray();
         var fit = new List<(double N, double S)>();
+        var peaks = new List<double>();
         foreach (string name in names)
         {
             var psi = new ProcessStartInfo(Environment.ProcessPath!) { RedirectStandardOutput = true, UseShellExecute = false };
+            // Started as "dotnet Electrostat.Bench.dll": the host needs the assembly path first.
+            if (Path.GetFileNameWithoutExtension(Environment.ProcessPath!) == "dotnet") psi.ArgumentList.Add(typeof(MeshBench).Assembly.Location);
             psi.ArgumentList.Add("mesh");
             psi.ArgumentList.Add("--child");
             psi.ArgumentList.Add(name);
@@ -44,6 +47,7 @@ internal sealed class MeshBench : IBenchSuite
             if (p.ExitCode != 0) return p.ExitCode;
             var fields = output.Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(f => f.Split('=')).Where(f => f.Length == 2).ToDictionary(f => f[0], f => f[1].Trim());
             fit.Add((double.Parse(fields["triangles"], CultureInfo.InvariantCulture), double.Parse(fields["seconds"], CultureInfo.InvariantCulture)));
+            peaks.Add(double.Parse(fields["peak_mb"], CultureInfo.InvariantCulture));
         }
         if (fit.Count >= 2)
         {
@@ -51,6 +55,7 @@ internal sealed class MeshBench : IBenchSuite
             double mx = fit.Average(f => Math.Log(f.N)), my = fit.Average(f => Math.Log(f.S));
             double sxy = fit.Sum(f => (Math.Log(f.N) - mx) * (Math.Log(f.S) - my)), sxx = fit.Sum(f => Math.Pow(Math.Log(f.N) - mx, 2));
             Console.Error.WriteLine(FormattableString.Invariant($"# mesh time exponent (seconds ~ triangles^k): k = {sxy / sxx:F3}"));
+            Console.Error.WriteLine(FormattableString.Invariant($"# mesh peak memory per million triangles, largest case: {peaks[^1] / (fit[^1].N / 1e6):F0} MB"));
         }
         return 0;
     }
