@@ -75,5 +75,16 @@ public class DesignCurveCuttingTests
         // The conductor surface is tagged as conductor 0, the box as enclosure.
         Assert.Equal(BoundaryKind.Conductor, input.Tags[input.Tags.ConductorTag(0)!.Value].Kind);
         Assert.Single(input.Tags.OfKind(BoundaryKind.Enclosure));
+
+        // Provenance: every vertex of a conductor-tagged edge traces back to conductor 0 (a Steiner point through its
+        // input segment, a corner through its input vertex); interior vertices trace to nothing.
+        var m = result.Mesh;
+        int conductorTag = input.Tags.ConductorTag(0)!.Value;
+        var onConductor = new HashSet<int>();
+        for (int s = 0; s < m.SegmentCount; s++)
+            if (m.SegmentTag[s] == conductorTag) { onConductor.Add(m.SegmentVertices[2 * s]); onConductor.Add(m.SegmentVertices[2 * s + 1]); }
+        Assert.All(onConductor, v => Assert.Equal(SourceEntity.Conductor, input.SourceOfVertex(result, v)!.Value.Entity));
+        var boundary = new HashSet<int>(m.SegmentVertices);
+        Assert.All(Enumerable.Range(0, m.VertexCount).Where(v => !boundary.Contains(v)), v => Assert.Null(input.SourceOfVertex(result, v)));
     }
 }
