@@ -56,4 +56,63 @@ public class MesherIntegrationTests
         Assert.True(Math.Abs(cm.ToEnclosure(0)) < 1e-6 * cm.Maxwell[0, 0]);
         Assert.True(cm.PassesPhysicsChecks, string.Join(" ", cm.Violations));
     }
+
+    [Fact]
+    public void IsolatedSphere_Axisymmetric_OnMesherOutput()
+    {
+        // C = 4πε0·a (Griffiths, Introduction to Electrodynamics, §2.5.4) on a quality mesh: half sphere of radius a
+        // in the (r, z) half plane, outer arc at R = 2a, the Kelvin image half disk of radius R about (0, 3R) with
+        // ε·R²/ρ'² (Freeman and Lowther 1989). Both arcs protected so their vertices match.
+        double a = 0.02, radius = 0.04, zc = 3 * radius;
+        const int sphere = 1, axis = 2;
+        int n = 90;
+        var g = new PlanarGraph();
+        List<(double X, double Y)> HalfCircle(double cz, double r) =>
+            Enumerable.Range(0, n + 1).Select(k =>
+            {
+                double al = -Math.PI / 2 + Math.PI * k / n;
+                return (k == 0 || k == n ? 0.0 : r * Math.Cos(al), cz + r * Math.Sin(al));
+            }).ToList();
+        int Chain(List<(double X, double Y)> pts, int tag)
+        {
+            int first = g.AddVertex(pts[0].X, pts[0].Y), prev = first;
+            for (int k = 1; k < pts.Count; k++)
+            {
+                int v = g.AddVertex(pts[k].X, pts[k].Y);
+                g.AddSegment(prev, v, tag);
+                prev = v;
+            }
+            return first;
+        }
+        // Interior: sphere arc (a), outer arc (R), and the two axis pieces between them.
+        int s0 = Chain(HalfCircle(0, a), sphere);
+        int o0 = Chain(HalfCircle(0, radius), InteriorArc);
+        g.AddSegment(o0, s0, axis);                 // (0, −R) to (0, −a)
+        g.AddSegment(s0 + n, o0 + n, axis);         // (0, a) to (0, R)
+        // Exterior image half disk: arc and its axis diameter through the centre vertex.
+        int e0 = Chain(HalfCircle(zc, radius), ExteriorArc);
+        int centre = g.AddVertex(0, zc);
+        g.AddSegment(e0, centre, axis + 10);
+        g.AddSegment(centre, e0 + n, axis + 10);
+        g.AddRegion(new RegionSeed(0.03, 0, 0));
+        g.AddRegion(new RegionSeed(0.01, zc, 1));
+        var mesh = Mesher.Generate(g, new MeshOptions
+        {
+            ProtectedTags = new HashSet<int> { InteriorArc, ExteriorArc },
+            MaxEdgeLengthMetres = 1.5e-3,
+        }).Mesh;
+        var p = new ElectrostaticProblem
+        {
+            Mesh = mesh,
+            Symmetry = Symmetry.Axisymmetric,
+            Conductors = [Conductor.Fixed("sphere", 1)],
+            Materials = new Dictionary<int, Material> { [0] = Material.Vacuum, [1] = Material.Vacuum },
+            Boundaries = new Dictionary<int, BoundaryRole> { [sphere] = On(0), [axis] = Natural, [axis + 10] = Natural },
+            OpenBoundary = new KelvinOpenBoundary(InteriorArc, ExteriorArc, 1, radius, 0, 0, 0, zc),
+        };
+        var sol = new FieldSolver(p).Solve();
+        double exact = 4 * Math.PI * Eps0 * a;
+        double c = sol.Conductors[0].ChargeCoulombs;
+        Assert.True(Math.Abs(c / exact - 1) < 5e-3, $"C = {c:E6}, exact {exact:E6}, rel {c / exact - 1:E3}, {mesh.TriangleCount} triangles");
+    }
 }
