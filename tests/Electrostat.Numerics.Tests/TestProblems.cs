@@ -31,7 +31,10 @@ internal static class TestProblems
     /// P1 stiffness matrix of −Δ on the unit square cut into m × m cells (two triangles each, alternating
     /// diagonals), interior nodes jittered by up to 20 % of h (seeded), Dirichlet boundary eliminated.
     /// </summary>
-    public static CsrMatrix JitteredP1(int m, int seed = 1)
+    public static CsrMatrix JitteredP1(int m, int seed = 1) => JitteredP1(m, seed, (_, _) => 1.0);
+
+    /// <summary>As <see cref="JitteredP1(int, int)"/> for −∇·(ε∇u) with ε(x, y) evaluated at each triangle's centroid.</summary>
+    public static CsrMatrix JitteredP1(int m, int seed, Func<double, double, double> coefficient)
     {
         int nodes = (m + 1) * (m + 1);
         var x = new double[nodes];
@@ -53,7 +56,16 @@ internal static class TestProblems
         }
         var tri = StructuredTriangles(m);
         var plan = CsrAssemblyPlan.Create(tri, 3, dof, count);
-        return plan.Assemble((e, k) => P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
+        return plan.Assemble((e, k) =>
+        {
+            var nodes = tri.AsSpan(3 * e, 3);
+            P1Stiffness(x, y, nodes, k);
+            double eps = coefficient((x[nodes[0]] + x[nodes[1]] + x[nodes[2]]) / 3, (y[nodes[0]] + y[nodes[1]] + y[nodes[2]]) / 3);
+            for (int q = 0; q < 9; q++)
+            {
+                k[q] *= eps;
+            }
+        });
     }
 
     /// <summary>Triangles of an m × m cell grid with nodes j·(m+1)+i, alternating diagonals.</summary>

@@ -8,17 +8,14 @@ namespace Electrostat.Numerics.Multigrid;
 /// Tentative and smoothed prolongators of smoothed aggregation (Vaněk, Mandel and Brezina 1996, §2, eqs. 2.2–2.5).
 /// With one near-null-space vector B the tentative prolongator is T(i, agg(i)) = B_i / ‖B restricted to the
 /// aggregate‖, i.e. the QR factorisation of each aggregate's block of B; the coarse null-space vector is the
-/// aggregate norm. The smoothed prolongator is P = (I − ω·D_F⁻¹A_F)·T with ω = (4/3)/ρ(D⁻¹A), where A_F is the
-/// filtered matrix of the paper's §3: weak couplings (a_ij² ≤ θ²·a_ii·a_jj) dropped and added to the diagonal. On P1
-/// matrices the weak couplings are the near-zero ones across near-right angles; dropping them keeps P and the
-/// coarse matrices sparser at no cost in convergence.
+/// aggregate norm. The smoothed prolongator is P = (I − ω·D⁻¹A)·T with ω = (4/3)/ρ(D⁻¹A).
 /// </summary>
 internal static class Prolongator
 {
     /// <summary>
     /// Builds P = (I − ω·D⁻¹A)·T and returns it; <paramref name="coarseNullSpace"/> receives the coarse B.
     /// </summary>
-    public static CsrMatrix Build(CsrMatrix a, double[] diagonal, int[] agg, int aggregates, double[] nullSpace, double omega, double theta, out double[] coarseNullSpace)
+    public static CsrMatrix Build(CsrMatrix a, double[] diagonal, int[] agg, int aggregates, double[] nullSpace, double omega, out double[] coarseNullSpace)
     {
         int n = a.Rows;
         var norms = new double[aggregates];
@@ -41,7 +38,6 @@ internal static class Prolongator
         // Two passes (count, then fill the final arrays) rather than growable buffers: the extra pass is cheaper
         // than allocating and page-faulting a second copy of P.
         var rp = a.RowPointers; var ci = a.ColumnIndices; var v = a.Values;
-        double theta2 = theta * theta;
         var prp = new int[n + 1];
         var parts = RowPartition.ByEntries(rp, n, a.NonZeroCount >= ParallelPolicy.MinimumParallelWork ? ParallelPolicy.DefaultWorkers : 1);
         Parallel.For(0, parts.Count, p =>
@@ -51,15 +47,9 @@ internal static class Prolongator
             for (int i = parts.Start(p); i < parts.End(p); i++)
             {
                 int count = 0;
-                double di = diagonal[i];
                 for (int k = rp[i]; k < rp[i + 1]; k++)
                 {
-                    int j = ci[k];
-                    if (j != i && v[k] * v[k] <= theta2 * di * diagonal[j])
-                    {
-                        continue;
-                    }
-                    int c = agg[j];
+                    int c = agg[ci[k]];
                     if (marker[c] != i)
                     {
                         marker[c] = i;
@@ -87,39 +77,15 @@ internal static class Prolongator
             {
                 int start = prp[i];
                 int next = start;
-                double di = diagonal[i];
-                // Filtered row: weak entries are lumped onto the diagonal weighted by the near-null-space vector B,
-                // so that A_F·B = A·B exactly (on the finest level B = 1 and this keeps row sums; on coarser levels
-                // B is the vector of aggregate norms).
-                double filteredDiagonal = di;
-                double bi = nullSpace[i];
-                for (int k = rp[i]; k < rp[i + 1]; k++)
-                {
-                    int j = ci[k];
-                    if (j != i && v[k] * v[k] <= theta2 * di * diagonal[j] && bi != 0)
-                    {
-                        filteredDiagonal += v[k] * nullSpace[j] / bi;
-                    }
-                }
-                if (!(filteredDiagonal > 0.1 * di))
-                {
-                    // Lumping must not nearly cancel the diagonal (only possible with large weak positive
-                    // couplings); fall back to dropping the weak entries without lumping.
-                    filteredDiagonal = di;
-                }
-                double scale = -omega / filteredDiagonal;
+                double scale = -omega / diagonal[i];
                 int own = agg[i];
                 position[own] = next;
                 pci[next] = own;
-                pv[next] = t[i] + scale * (filteredDiagonal - di) * t[i];
+                pv[next] = t[i];
                 next++;
                 for (int k = rp[i]; k < rp[i + 1]; k++)
                 {
                     int j = ci[k];
-                    if (j != i && v[k] * v[k] <= theta2 * di * diagonal[j])
-                    {
-                        continue;
-                    }
                     int c = agg[j];
                     double val = scale * v[k] * t[j];
                     int pos = position[c];

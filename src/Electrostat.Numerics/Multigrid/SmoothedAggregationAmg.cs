@@ -100,7 +100,12 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
                 rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(a, diagonal, work.Residual, work.Solution, options.SpectralRadiusIterations));
             }
             double omega = options.ProlongatorDamping / rho;
-            var p = Prolongator.Build(a, diagonal, agg, aggregates, nullSpace, omega, theta, out nullSpace);
+            // The prolongator is smoothed with A itself, not with the filtered matrix of Vaněk et al. (§3, weak
+            // couplings lumped onto the diagonal): filtering lowered the operator complexity (1.51 → 1.37) but on
+            // high-contrast dielectrics it cost 35 instead of 20 CG iterations at contrast 10³ and 114 instead of
+            // 32 at 10⁶ (measured on a jittered P1 problem with 90,000 unknowns); robustness to permittivity
+            // contrast matters more here than 10 % of V-cycle time.
+            var p = Prolongator.Build(a, diagonal, agg, aggregates, nullSpace, omega, out nullSpace);
             var r = p.Transpose();
             var coarse = GalerkinProduct.Compute(r, a, p);
             var packedP = new PackedCsr(p);
