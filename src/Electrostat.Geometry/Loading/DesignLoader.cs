@@ -25,6 +25,8 @@ public static class DesignLoader
     {
         ArgumentNullException.ThrowIfNull(path);
         string text;
+        if (Directory.Exists(path))
+            return new DesignLoadResult(null, [new DesignProblem(ProblemSeverity.Error, path, "", 0, 0, null, "this is a folder, not a design file", "give the path of a .json design file")]);
         try
         {
             text = File.ReadAllText(path);

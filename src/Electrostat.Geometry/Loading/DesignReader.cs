@@ -35,6 +35,12 @@ internal sealed class DesignReader
     public DesignLoadResult Read(string text, IReadOnlyDictionary<string, string>? overrides)
     {
         _sink.SetText(text);
+        if (string.IsNullOrWhiteSpace(text))
+        {
+            _sink.Add(new DesignProblem(ProblemSeverity.Error, _sink.Source, "$", 0, 0, null, "the design file is empty",
+                "start from an example in geometries/ or the complete example in docs/design-file.md"));
+            return new DesignLoadResult(null, _sink.Problems);
+        }
         JToken root;
         try
         {
@@ -50,6 +56,7 @@ internal sealed class DesignReader
             string msg = e.Message;
             int cut = msg.IndexOf(" Path '", StringComparison.Ordinal);
             if (cut > 0) msg = msg[..cut];
+            if (msg.StartsWith("Error reading JToken", StringComparison.Ordinal)) msg = "the file holds no JSON value (only comments or white space)";
             _sink.Add(new DesignProblem(ProblemSeverity.Error, _sink.Source, e.Path is { Length: > 0 } p ? "$." + p : "$", e.LineNumber, e.LinePosition, null,
                 "JSON syntax error: " + msg.TrimEnd('.'), "fix the JSON syntax at this line and column (comments // and /* */ are allowed)"));
             return new DesignLoadResult(null, _sink.Problems);

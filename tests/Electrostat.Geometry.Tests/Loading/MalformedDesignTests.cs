@@ -122,6 +122,24 @@ public class MalformedDesignTests
         Assert.Contains("near (6 mm, 26 mm)", p.ToString(), StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("", "the design file is empty")]
+    [InlineData("  // only a comment\n", "holds no JSON value")]
+    [InlineData("[1, 2]", "the design file must be an object")]
+    [InlineData("{ \"units\": \"mm\", \"units\": \"m\" }", "JSON syntax error")]
+    public void DegenerateFiles_GiveOneClearProblem(string text, string message)
+    {
+        var result = DesignLoader.LoadFromText(text, "x.json");
+        Assert.Contains(result.Errors, p => p.Message.Contains(message, StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Folder_IsOneClearProblem()
+    {
+        var p = Assert.Single(DesignLoader.Load(Path.GetTempPath()).Problems);
+        Assert.Contains("folder", p.Message, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void MissingFile_IsOneClearProblem()
     {
