@@ -150,6 +150,29 @@ public class SizingAndRefinementTests
     }
 
     [Fact]
+    public void RegionSeedSize_AppliesOnlyInItsRegion()
+    {
+        // Unit square split at x = 0.5 into region 1 (left, limit 0.02 m) and region 2 (right, global 0.2 m).
+        var g = new PlanarGraph();
+        int a = g.AddVertex(0, 0), b = g.AddVertex(0.5, 0), c = g.AddVertex(1, 0), d = g.AddVertex(1, 1), e = g.AddVertex(0.5, 1), f = g.AddVertex(0, 1);
+        g.AddSegment(a, b, 1); g.AddSegment(b, c, 1); g.AddSegment(c, d, 1); g.AddSegment(d, e, 1); g.AddSegment(e, f, 1); g.AddSegment(f, a, 1);
+        g.AddSegment(b, e, 2);
+        g.AddRegion(new RegionSeed(0.25, 0.5, 1, 0.02));
+        g.AddRegion(new RegionSeed(0.75, 0.5, 2));
+        var r = Mesher.Generate(g, new MeshOptions { MaxEdgeLengthMetres = 0.2, GradingRatio = null });
+        Assert.True(r.Validate(new Dictionary<int, double> { [1] = 0.5, [2] = 0.5 }).IsValid);
+        var m = r.Mesh;
+        double maxLeft = 0, maxRight = 0;
+        for (int t = 0; t < m.TriangleCount; t++)
+        {
+            if (m.TriangleRegion[t] == 1) maxLeft = Math.Max(maxLeft, LongestEdge(m, t));
+            else maxRight = Math.Max(maxRight, LongestEdge(m, t));
+        }
+        Assert.True(maxLeft <= 0.02 * (1 + 1e-12), $"left {maxLeft}");
+        Assert.True(maxRight > 0.05, $"right {maxRight}: the right region should stay coarse away from the interface");
+    }
+
+    [Fact]
     public void Budget_Exceeded_ThrowsClearError()
     {
         var g = new PlanarGraph();
