@@ -182,4 +182,27 @@ public class DesignLoaderTests
         var p = new DesignProblem(ProblemSeverity.Error, "d.json", "$.conductors[0].shape", 12, 7, new Point2(0.001, -0.0025), "outline crosses itself", "move the points");
         Assert.Equal("d.json:12:7: error: outline crosses itself (at $.conductors[0].shape, near (1 mm, -2.5 mm)); fix: move the points", p.ToString());
     }
+
+    [Fact]
+    public void ConductorInsideHoleOfAnother_IsNotAShortCircuit()
+    {
+        const string text = """
+            {
+              "units": "mm", "symmetry": "planar",
+              "enclosure": { "margin": 5 },
+              "conductors": [
+                { "name": "shield", "potential": 0, "shape": { "type": "circle", "center": [0, 0], "radius": 10,
+                  "holes": [ { "type": "circle", "center": [0, 0], "radius": 8 } ] } },
+                { "name": "core", "potential": "1 kV", "shape": { "type": "circle", "center": [0, 0], "radius": 2 } }
+              ]
+            }
+            """;
+        var d = Valid(text);
+        Assert.Equal(RegionKind.Background, d.Classify(5e-3, 0).Kind);
+        Assert.Equal(new RegionHit(RegionKind.Conductor, 0), d.Classify(9e-3, 0));
+        Assert.Equal(new RegionHit(RegionKind.Conductor, 1), d.Classify(1e-3, 0));
+        var (gap, _, _) = d.Regions.ConductorClearance(0, 1);
+        Assert.Equal(6e-3, gap, d.Regions.ChordToleranceMetres); // flattened arcs: within the chord tolerance
+        Assert.Equal(2, d.Electrodes.Count);
+    }
 }
