@@ -293,6 +293,10 @@ internal sealed class CompiledProblem
             throw new FieldProblemException("An axisymmetric open boundary must have both circle centres on the axis (x = r = 0).");
         }
         double tol = 1e-6 * r;
+        if (Problem.Materials.TryGetValue(kb.ExteriorRegion, out var exteriorMaterial) && exteriorMaterial.ChargeDensityCoulombsPerCubicMetre != 0)
+        {
+            throw new FieldProblemException($"The open boundary's exterior region {kb.ExteriorRegion} stands for empty space outside the circle and cannot carry a volume charge: enlarge the circle so every charge lies inside it.");
+        }
         var interior = ArcNodes(kb.InteriorArcTag, kb.InteriorCentreX, kb.InteriorCentreY, r, tol, "interior");
         var exterior = ArcNodes(kb.ExteriorArcTag, kb.ExteriorCentreX, kb.ExteriorCentreY, r, tol, "exterior");
         if (interior.Count != exterior.Count)

@@ -64,6 +64,11 @@ public sealed class FieldSolution
     /// <summary>Field energy as a total: times the depth for planar problems, joules.</summary>
     public double TotalEnergyJoules => Problem.Symmetry == Symmetry.Planar ? EnergyJoules * Problem.DepthMetres : EnergyJoules;
 
+    /// <summary>Charge of conductor <paramref name="conductor"/> as a total in coulombs: times the depth for planar problems.</summary>
+    /// <param name="conductor">Conductor index.</param>
+    public double TotalChargeCoulombs(int conductor) =>
+        Problem.Symmetry == Symmetry.Planar ? Conductors[conductor].ChargeCoulombs * Problem.DepthMetres : Conductors[conductor].ChargeCoulombs;
+
     /// <summary>The solver report (iterations, residual, timings).</summary>
     public SolveReport Report { get; }
 }

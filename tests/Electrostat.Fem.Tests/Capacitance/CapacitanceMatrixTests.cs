@@ -67,7 +67,9 @@ public class CapacitanceMatrixTests
         var q = cm.Charges(v);
         for (int i = 0; i < 3; i++) Assert.Equal(1, sol.Conductors[i].ChargeCoulombs / q[i], 7);
         Assert.Equal(1, sol.EnergyJoules / cm.Energy(v), 7);
-        Assert.Equal(sol.EnergyJoules, sol.Conductors.Sum(c => c.EnergyShareJoules), 15);
+        Assert.Equal(1, sol.Conductors.Sum(c => c.EnergyShareJoules) / sol.EnergyJoules, 7);
+        Assert.Equal(1, sol.TotalChargeCoulombs(0) / (sol.Conductors[0].ChargeCoulombs * 0.2), 12);
+        Assert.Equal(1, sol.TotalEnergyJoules / (sol.EnergyJoules * 0.2), 12);
     }
 
     [Fact]
