@@ -110,9 +110,9 @@ internal sealed partial class MeshCore
             }
             if (!_bad.TryPop(out int t, out int stamp)) break;
             if (TStamp[t] != stamp) continue;
-            int cls = Classify(t, out bool skinny, out bool oversized);
+            int cls = Classify(t, out bool skinny);
             if (cls < 0) continue;
-            if (skinny && !oversized && IsUnfixable(t))
+            if (skinny && IsUnfixable(t) && !IsOversized(t))
             {
                 TSkip[t] = SkipReason.SmallInputAngle;
                 SkipSmallAngle++;
@@ -149,8 +149,11 @@ internal sealed partial class MeshCore
         return (X[a] - X[p]) * (X[c] - X[p]) + (Y[a] - Y[p]) * (Y[c] - Y[p]) < 0;
     }
 
-    /// <summary>Bucket of a bad triangle (skinny ones by their smallest angle, worst first; then oversized ones, largest first), or -1 if good.</summary>
-    private int Classify(int t, out bool skinny, out bool oversized)
+    /// <summary>
+    /// Bucket of a bad triangle (skinny ones by their smallest angle, worst first; then oversized ones, largest first),
+    /// or -1 if good. The size field is evaluated only for triangles that are not skinny.
+    /// </summary>
+    private int Classify(int t, out bool skinny)
     {
         int b = 3 * t;
         int va = TV[b], vb = TV[b + 1], vc = TV[b + 2];
@@ -165,27 +168,32 @@ internal sealed partial class MeshCore
         // sin²(smallest angle) = (2·area)² / (middle edge² · longest edge²), from the law of sines.
         double s2 = area2 * area2 / (lmid * lmax);
         skinny = s2 < _sin2Bound;
-        oversized = false;
-        if (_hasSize)
+        if (skinny)
         {
-            double h = _size!.At((ax + bx + cx) / 3, (ay + by + cy) / 3, TReg[t]);
-            oversized = lmax > h * h;
-            if (!skinny && oversized)
-            {
-                double r = lmax / (h * h);
-                int k = (int)Math.Log2(r);
-                return 64 + Math.Max(0, 31 - Math.Min(31, k));
-            }
+            if (lmin < _minLen2) return -1;
+            int q = (int)(Math.Sqrt(s2 / _sin2Bound) * 64);
+            return Math.Clamp(q, 0, 63);
         }
-        if (!skinny) return -1;
-        if (lmin < _minLen2) return -1;
-        int q = (int)(Math.Sqrt(s2 / _sin2Bound) * 64);
-        return Math.Clamp(q, 0, 63);
+        if (!_hasSize) return -1;
+        double h = _size!.At((ax + bx + cx) / 3, (ay + by + cy) / 3, TReg[t]);
+        double r = lmax / (h * h);
+        if (!(r > 1)) return -1;
+        return 64 + Math.Max(0, 31 - Math.Min(31, Math.ILogB(r)));
+    }
+
+    private bool IsOversized(int t)
+    {
+        if (!_hasSize) return false;
+        int b = 3 * t;
+        int va = TV[b], vb = TV[b + 1], vc = TV[b + 2];
+        double lmax = Math.Max(Len2(vb, vc), Math.Max(Len2(vc, va), Len2(va, vb)));
+        double h = _size!.At((X[va] + X[vb] + X[vc]) / 3, (Y[va] + Y[vb] + Y[vc]) / 3, TReg[t]);
+        return lmax > h * h;
     }
 
     private void EnqueueIfBad(int t)
     {
-        int cls = Classify(t, out _, out _);
+        int cls = Classify(t, out _);
         if (cls >= 0) _bad.Push(t, TStamp[t], cls);
     }
 

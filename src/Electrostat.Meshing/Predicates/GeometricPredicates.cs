@@ -19,7 +19,9 @@ namespace Electrostat.Meshing.Predicates;
 /// largest component of the exact expansion when the filter could not decide. The filter bounds are Shewchuk's
 /// "A" bounds (ccwerrboundA, iccerrboundA); when the estimate is not certified the determinant is evaluated exactly
 /// from Two-Diff differences (no rounding anywhere), rather than through Shewchuk's intermediate B/C stages.
-/// Inputs must be finite and products must not overflow (|coordinate| below about 1e75).
+/// Exactness needs every intermediate product to stay within the normal double range: this holds when every
+/// coordinate is zero or has magnitude between about 1e-50 and 1e50 (products of four coordinate differences and
+/// their error terms then stay above 1e-300 and below 1e300). Outside that range a sign may be wrong.
 /// </remarks>
 public static class GeometricPredicates
 {
