@@ -116,6 +116,7 @@ internal sealed class DofMap
         {
             throw new FieldProblemException("No vertex has a known potential, so the potential is undetermined: add an enclosure, a fixed-potential conductor, or (axisymmetric) an open boundary.");
         }
+        CheckEveryPieceIsAnchored(cp, parent, dofOfNode);
         Debug.Assert(count > 0 || n > 0);
         return new DofMap(dofOfNode, count, terminalOfNode, fixedTerminal, floatingDof, order);
     }
@@ -173,6 +174,34 @@ internal sealed class DofMap
         w = (w | (w << 2)) & 0x3333333333333333UL;
         w = (w | (w << 1)) & 0x5555555555555555UL;
         return w;
+    }
+
+    /// <summary>
+    /// Every connected piece of the mesh (triangles sharing vertices, plus merged vertices) must reach a vertex of
+    /// known potential; otherwise its potential is undetermined and the matrix singular. Reported with a place.
+    /// </summary>
+    private static void CheckEveryPieceIsAnchored(CompiledProblem cp, int[] parent, int[] dofOfNode)
+    {
+        var tri = cp.Mesh.Triangles;
+        for (int t = 0; t < cp.Mesh.TriangleCount; t++)
+        {
+            Union(parent, tri[3 * t], tri[3 * t + 1]);
+            Union(parent, tri[3 * t], tri[3 * t + 2]);
+        }
+        int n = dofOfNode.Length;
+        var anchored = new bool[n];
+        for (int i = 0; i < n; i++)
+        {
+            if (dofOfNode[i] < 0) anchored[Find(parent, i)] = true;
+        }
+        for (int i = 0; i < n; i++)
+        {
+            if (!anchored[Find(parent, i)])
+            {
+                throw new FieldProblemException(string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"The part of the mesh around ({cp.Mesh.X[i]:G6} m, {cp.Mesh.Y[i]:G6} m) touches no conductor of known potential, no enclosure and no open boundary, so its potential is undetermined: connect it to the rest of the design or give it a fixed-potential boundary."));
+            }
+        }
     }
 
     private static int Find(int[] parent, int i)

@@ -53,6 +53,20 @@ public class ProblemValidationTests
     }
 
     [Fact]
+    public void DetachedPiece_IsReportedWithAPlace()
+    {
+        // A second square far away with only natural boundaries has no reference potential.
+        var lone = StructuredMeshes.Rectangle(5, 6, 0, 1, 2, 2, sideTag: (_, _, _) => 77);
+        var mesh = StructuredMeshes.Union(Square, lone);
+        var roles = Roles();
+        roles[77] = Natural;
+        var solver = new FieldSolver(Make(mesh, [Conductor.Fixed("lid", 1)], roles));
+        var ex = Assert.Throws<FieldProblemException>(() => solver.Solve());
+        Assert.Contains("undetermined", ex.Message);
+        Assert.Contains("(5", ex.Message);
+    }
+
+    [Fact]
     public void ConductorWithoutSegments_IsReported()
     {
         var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(Make(Square, [Conductor.Fixed("lid", 1), Conductor.Fixed("ghost", 2)], Roles())));
