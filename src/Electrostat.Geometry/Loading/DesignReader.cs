@@ -132,8 +132,9 @@ internal sealed class DesignReader
 
         var validator = new DesignValidator(_ctx, _shapes);
         var enclosure = validator.BuildEnclosure(enclosureToken, conductors, dielectrics);
-        if (_sink.HasErrors || enclosure is null) return null;
+        if (enclosure is null) return null;
 
+        // Cross-checks run on the bodies that were read, even after other errors, so that all problems come at once.
         var electrodes = validator.Validate(enclosure, conductors, dielectrics);
         if (_sink.HasErrors || electrodes is null) return null;
 
@@ -146,7 +147,8 @@ internal sealed class DesignReader
         var dielectricModels = dielectrics.Select(d => new Dielectric(d.Name, d.MaterialName == Material.Vacuum.Name && !materials.ContainsKey(d.MaterialName)
             ? Material.Vacuum : materials[d.MaterialName!], d.Shape)).ToList();
         var allMaterials = new Dictionary<string, Material>(materials, StringComparer.Ordinal);
-        if (!allMaterials.ContainsKey(background.Name)) allMaterials[background.Name] = background;
+        foreach (var m in dielectricModels.Select(d => d.Material).Append(background))
+            allMaterials.TryAdd(m.Name, m); // the built-in vacuum, when used
         return new Design(_path, title, _ctx.Symmetry, _ctx.Unit, depth, new Dictionary<string, double>(_ctx.ParameterValues),
             allMaterials, background, enclosure, conductorModels, electrodes, dielectricModels, checks);
     }

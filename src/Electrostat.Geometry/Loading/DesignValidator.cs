@@ -125,6 +125,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
 
     public List<Electrode>? Validate(Enclosure enclosure, List<BodyDraft> conductors, List<BodyDraft> dielectrics)
     {
+        bool earlierErrors = Sink.HasErrors; // then some bodies may be missing: skip whole-design judgements
         bool axisymmetric = ctx.Symmetry == Symmetry.Axisymmetric;
         var enclosurePoly = NtsShapes.ToPolygon(enclosure.Shape, _chord);
         var enclosurePrepared = NetTopologySuite.Geometries.Prepared.PreparedGeometryFactory.Prepare(enclosurePoly);
@@ -271,7 +272,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         var potentials = conductors.Where(c => c.PotentialVolts is not null).Select(c => c.PotentialVolts!.Value).ToHashSet();
         if (wallLines.Length > 0) potentials.Add(enclosure.PotentialVolts);
         bool charged = conductors.Any(c => c.ChargeCoulombs is double q && q != 0);
-        if (potentials.Count < 2 && !charged)
+        if (potentials.Count < 2 && !charged && !earlierErrors)
         {
             Sink.Warning(conductors.Count > 0 ? conductors[0].Token.Parent : null, "the design has no potential difference: every conductor and the enclosure are at the same potential, so the field is zero everywhere",
                 "give at least one conductor a different potential, or a floating conductor a charge");

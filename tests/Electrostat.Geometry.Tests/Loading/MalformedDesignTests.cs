@@ -111,6 +111,16 @@ public class MalformedDesignTests
     }
 
     [Fact]
+    public void GeometricProblems_AreReportedAlongsideSyntaxLevelOnes()
+    {
+        // A misspelt key and a short circuit in the same file: both come in one run.
+        string text = DesignTexts.With(("\"background\":", "\"backgroud\":"), ("\"max\": [20, 0]", "\"max\": [20, 6]"));
+        var errors = DesignLoader.LoadFromText(text).Errors.Select(e => e.Message).ToList();
+        Assert.Contains(errors, m => m.Contains("unknown key \"backgroud\"", StringComparison.Ordinal));
+        Assert.Contains(errors, m => m.Contains("short circuit", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void GeometricProblem_CarriesCoordinate()
     {
         string text = DesignTexts.With(("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"polygon\", \"points\": [[-30, 20], [30, 30], [30, 20], [-10, 30]] }"));
