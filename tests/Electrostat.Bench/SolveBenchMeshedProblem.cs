@@ -34,8 +34,8 @@ internal static class SolveBenchMeshedProblem
         return new ElectrostaticProblem
         {
             Mesh = mesh,
-            Conductors = [Conductor.Fixed("A", 500), Conductor.Fixed("B", -500)],
-            Materials = new Dictionary<int, Material> { [1] = Material.Dielectric(3.8), [2] = Material.Vacuum },
+            Conductors = [ConductorDefinition.Fixed("A", 500), ConductorDefinition.Fixed("B", -500)],
+            Materials = new Dictionary<int, RegionMaterial> { [1] = RegionMaterial.Dielectric(3.8), [2] = RegionMaterial.Vacuum },
             Boundaries = new Dictionary<int, BoundaryRole>
             {
                 [box] = new EnclosureBoundary(), [slabTop] = new NaturalBoundary(),

@@ -64,8 +64,8 @@ internal static class SolveBenchProblem
         return new ElectrostaticProblem
         {
             Mesh = mesh,
-            Conductors = [Conductor.Fixed("lid", 1000), Conductor.Fixed("plate", -200)],
-            Materials = new Dictionary<int, Material> { [1] = Material.Dielectric(4.5), [2] = Material.Vacuum },
+            Conductors = [ConductorDefinition.Fixed("lid", 1000), ConductorDefinition.Fixed("plate", -200)],
+            Materials = new Dictionary<int, RegionMaterial> { [1] = RegionMaterial.Dielectric(4.5), [2] = RegionMaterial.Vacuum },
             Boundaries = new Dictionary<int, BoundaryRole>
             {
                 [1] = new EnclosureBoundary(), [3] = new ConductorBoundary(0), [10] = new ConductorBoundary(1),

@@ -29,7 +29,7 @@ internal sealed class CompiledProblem
 
     public TriangleMesh Mesh { get; }
 
-    public Symmetry Symmetry => Problem.Symmetry;
+    public ProblemSymmetry Symmetry => Problem.Symmetry;
 
     public int ConductorCount { get; }
 
@@ -129,14 +129,14 @@ internal sealed class CompiledProblem
     {
         var m = Mesh;
         if (m.TriangleCount == 0) throw new FieldProblemException("The mesh has no triangles: nothing to solve.");
-        if (Problem.Symmetry == Symmetry.Planar && !(Problem.DepthMetres > 0 && double.IsFinite(Problem.DepthMetres)))
+        if (Problem.Symmetry == ProblemSymmetry.Planar && !(Problem.DepthMetres > 0 && double.IsFinite(Problem.DepthMetres)))
         {
             throw new FieldProblemException($"The planar depth {Problem.DepthMetres} m must be a positive number of metres.");
         }
         for (int i = 0; i < m.VertexCount; i++)
         {
             if (!double.IsFinite(m.X[i]) || !double.IsFinite(m.Y[i])) throw new FieldProblemException($"Mesh vertex {i} has a non-finite coordinate.");
-            if (Problem.Symmetry == Symmetry.Axisymmetric && m.X[i] < 0)
+            if (Problem.Symmetry == ProblemSymmetry.Axisymmetric && m.X[i] < 0)
             {
                 throw new FieldProblemException($"Mesh vertex {i} at {At(m.X[i], m.Y[i])} has a negative radius; an axisymmetric design must lie in r >= 0 (x is the radius).");
             }
@@ -288,7 +288,7 @@ internal sealed class CompiledProblem
         var m = Mesh;
         double r = kb.RadiusMetres;
         if (!(r > 0 && double.IsFinite(r))) throw new FieldProblemException($"The open boundary radius {r} m must be positive.");
-        if (Symmetry == Symmetry.Axisymmetric && (kb.InteriorCentreX != 0 || kb.ExteriorCentreX != 0))
+        if (Symmetry == ProblemSymmetry.Axisymmetric && (kb.InteriorCentreX != 0 || kb.ExteriorCentreX != 0))
         {
             throw new FieldProblemException("An axisymmetric open boundary must have both circle centres on the axis (x = r = 0).");
         }
@@ -329,7 +329,7 @@ internal sealed class CompiledProblem
         }
         InfinityNode = best;
         InfinityPotential = kb.PotentialAtInfinityVolts;
-        if (Symmetry == Symmetry.Axisymmetric)
+        if (Symmetry == ProblemSymmetry.Axisymmetric)
         {
             if (NodeTerminal[best] >= 0) throw new FieldProblemException("The open boundary's image centre lies on a conductor.");
             NodeTerminal[best] = InfinityTerminal;

@@ -200,7 +200,7 @@ internal static class SystemAssembler
         var mat = cp.TriangleMaterial;
         var eps = cp.MaterialEpsilon;
         var kelvin = cp.KelvinWeights;
-        bool axisymmetric = cp.Symmetry == Problem.Symmetry.Axisymmetric;
+        bool axisymmetric = cp.Symmetry == Problem.ProblemSymmetry.Axisymmetric;
         Parallel.For(0, parts, p =>
         {
             int start = (int)((long)n * p / parts), end = (int)((long)n * (p + 1) / parts);

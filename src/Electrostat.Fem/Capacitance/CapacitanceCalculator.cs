@@ -60,7 +60,7 @@ internal static class CapacitanceCalculator
         var names = cp.Problem.Conductors.Select(c => c.Name).ToArray();
         var dense = Matrix<double>.Build.DenseOfArray(maxwell);
         var eig = dense.Evd(MathNet.Numerics.LinearAlgebra.Symmetricity.Symmetric).EigenValues.Select(z => z.Real).Order().ToArray();
-        var violations = Check(maxwell, names, eig, maxDiag, cp.HasEnclosure || (cp.InfinityNode >= 0 && cp.Symmetry == Problem.Symmetry.Axisymmetric));
+        var violations = Check(maxwell, names, eig, maxDiag, cp.HasEnclosure || (cp.InfinityNode >= 0 && cp.Symmetry == Problem.ProblemSymmetry.Axisymmetric));
         for (int j = 0; j < n; j++)
         {
             if (!reports[j].Converged)

@@ -22,7 +22,7 @@ namespace Electrostat.Fem.Capacitance;
 /// </remarks>
 public sealed class CapacitanceMatrixResult
 {
-    internal CapacitanceMatrixResult(Symmetry symmetry, double depth, IReadOnlyList<string> names, double[,] raw, double[,] maxwell,
+    internal CapacitanceMatrixResult(ProblemSymmetry symmetry, double depth, IReadOnlyList<string> names, double[,] raw, double[,] maxwell,
         double symmetryError, double energyMismatch, IReadOnlyList<SolveReport> reports, ReducedCapacitance? reduced,
         IReadOnlyList<double> eigenvalues, IReadOnlyList<string> violations)
     {
@@ -40,7 +40,7 @@ public sealed class CapacitanceMatrixResult
     }
 
     /// <summary>Planar (F/m) or axisymmetric (F).</summary>
-    public Symmetry Symmetry { get; }
+    public ProblemSymmetry Symmetry { get; }
 
     /// <summary>Depth used by <see cref="TotalFarads"/> for planar problems, metres.</summary>
     public double DepthMetres { get; }
@@ -99,7 +99,7 @@ public sealed class CapacitanceMatrixResult
     /// <summary>An entry as a total in farads: times the depth for planar problems.</summary>
     /// <param name="i">Row.</param>
     /// <param name="j">Column.</param>
-    public double TotalFarads(int i, int j) => Symmetry == Symmetry.Planar ? Maxwell[i, j] * DepthMetres : Maxwell[i, j];
+    public double TotalFarads(int i, int j) => Symmetry == ProblemSymmetry.Planar ? Maxwell[i, j] * DepthMetres : Maxwell[i, j];
 
     /// <summary>Charges Q = C·V (C/m planar, C axisymmetric) for conductor potentials V (volts, from the enclosure).</summary>
     /// <param name="potentialsVolts">One potential per terminal.</param>

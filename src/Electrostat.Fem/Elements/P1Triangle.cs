@@ -24,10 +24,10 @@ public static class P1Triangle
     /// The element weight W = ∫_T w dA: A (m²) for planar, 2π·A·r̄ (m³) for axisymmetric, exact in both cases.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static double Weight(Symmetry symmetry, double x1, double y1, double x2, double y2, double x3, double y3)
+    public static double Weight(ProblemSymmetry symmetry, double x1, double y1, double x2, double y2, double x3, double y3)
     {
         double area = 0.5 * TwiceArea(x1, y1, x2, y2, x3, y3);
-        return symmetry == Symmetry.Planar ? area : 2 * Math.PI * area * (x1 + x2 + x3) / 3.0;
+        return symmetry == ProblemSymmetry.Planar ? area : 2 * Math.PI * area * (x1 + x2 + x3) / 3.0;
     }
 
     /// <summary>
@@ -68,11 +68,11 @@ public static class P1Triangle
     /// planar ρA/3 (C/m); axisymmetric 2πρA(2r_i + r_j + r_k)/12 (C), from ∫N_iN_j dA = A(1 + δ_ij)/12 — both exact.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static void AddChargeLoad(Symmetry symmetry, double x1, double y1, double x2, double y2, double x3, double y3,
+    public static void AddChargeLoad(ProblemSymmetry symmetry, double x1, double y1, double x2, double y2, double x3, double y3,
         double chargeDensity, Span<double> f)
     {
         double area = 0.5 * TwiceArea(x1, y1, x2, y2, x3, y3);
-        if (symmetry == Symmetry.Planar)
+        if (symmetry == ProblemSymmetry.Planar)
         {
             double q = chargeDensity * area / 3.0;
             f[0] += q; f[1] += q; f[2] += q;

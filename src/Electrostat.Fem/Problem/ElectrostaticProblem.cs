@@ -9,7 +9,7 @@ namespace Electrostat.Fem.Problem;
 /// <remarks>
 /// The mapping is explicit: <see cref="Materials"/> must name every region attribute that occurs in the mesh, and
 /// <see cref="Boundaries"/> every segment tag (the arc tags of <see cref="OpenBoundary"/> excepted). See
-/// <see cref="Symmetry"/> for units of the results, <see cref="Material"/> for the sign of charge.
+/// <see cref="ProblemSymmetry"/> for units of the results, <see cref="RegionMaterial"/> for the sign of charge.
 /// </remarks>
 public sealed record ElectrostaticProblem
 {
@@ -17,16 +17,16 @@ public sealed record ElectrostaticProblem
     public required TriangleMesh Mesh { get; init; }
 
     /// <summary>Planar (per metre) or axisymmetric (totals).</summary>
-    public Symmetry Symmetry { get; init; } = Symmetry.Planar;
+    public ProblemSymmetry Symmetry { get; init; } = ProblemSymmetry.Planar;
 
     /// <summary>Depth of a planar device, metres, used only to turn per-metre results into totals.</summary>
     public double DepthMetres { get; init; } = 1.0;
 
     /// <summary>Material of each region attribute.</summary>
-    public required IReadOnlyDictionary<int, Material> Materials { get; init; }
+    public required IReadOnlyDictionary<int, RegionMaterial> Materials { get; init; }
 
     /// <summary>The conductors (terminals), indexed by <see cref="ConductorBoundary.ConductorIndex"/>.</summary>
-    public required IReadOnlyList<Conductor> Conductors { get; init; }
+    public required IReadOnlyList<ConductorDefinition> Conductors { get; init; }
 
     /// <summary>Role of each segment tag.</summary>
     public required IReadOnlyDictionary<int, BoundaryRole> Boundaries { get; init; }

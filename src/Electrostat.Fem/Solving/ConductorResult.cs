@@ -1,7 +1,7 @@
 namespace Electrostat.Fem.Solving;
 
 /// <summary>
-/// One conductor's state in a solved design. Units follow <see cref="Problem.Symmetry"/>: per metre of depth for
+/// One conductor's state in a solved design. Units follow <see cref="Problem.ProblemSymmetry"/>: per metre of depth for
 /// planar problems (C/m, J/m), totals for axisymmetric ones (C, J).
 /// </summary>
 /// <param name="Name">Conductor name.</param>

@@ -8,7 +8,7 @@ namespace Electrostat.Fem.Solving;
 /// energy and the solver report. Read-only: nothing here solves again.
 /// </summary>
 /// <remarks>
-/// Units follow <see cref="Problem.Symmetry"/>: planar charges and energies are per metre of depth, axisymmetric
+/// Units follow <see cref="Problem.ProblemSymmetry"/>: planar charges and energies are per metre of depth, axisymmetric
 /// ones are totals over 2π. The field is constant per P1 triangle. Arrays are shared, not copied: do not mutate them.
 /// </remarks>
 public sealed class FieldSolution
@@ -62,12 +62,12 @@ public sealed class FieldSolution
     public double EnergyJoules { get; }
 
     /// <summary>Field energy as a total: times the depth for planar problems, joules.</summary>
-    public double TotalEnergyJoules => Problem.Symmetry == Symmetry.Planar ? EnergyJoules * Problem.DepthMetres : EnergyJoules;
+    public double TotalEnergyJoules => Problem.Symmetry == ProblemSymmetry.Planar ? EnergyJoules * Problem.DepthMetres : EnergyJoules;
 
     /// <summary>Charge of conductor <paramref name="conductor"/> as a total in coulombs: times the depth for planar problems.</summary>
     /// <param name="conductor">Conductor index.</param>
     public double TotalChargeCoulombs(int conductor) =>
-        Problem.Symmetry == Symmetry.Planar ? Conductors[conductor].ChargeCoulombs * Problem.DepthMetres : Conductors[conductor].ChargeCoulombs;
+        Problem.Symmetry == ProblemSymmetry.Planar ? Conductors[conductor].ChargeCoulombs * Problem.DepthMetres : Conductors[conductor].ChargeCoulombs;
 
     /// <summary>The solver report (iterations, residual, timings).</summary>
     public SolveReport Report { get; }

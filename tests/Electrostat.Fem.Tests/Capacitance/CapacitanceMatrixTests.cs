@@ -18,14 +18,14 @@ public class CapacitanceMatrixTests
             i is >= 12 and < 14 && j is >= 3 and < 9 ? 1 :
             i is >= 18 and < 26 && j is >= 8 and < 9 ? 2 : -1;
         var mesh = StructuredMeshes.Rectangle(0, 0.03, 0, 0.012, 30, 12, region: (_, y) => y < 0.005 ? 1 : 2, hole: Hole);
-        var conductors = new List<Conductor> { Conductor.Fixed("A", 100), Conductor.Fixed("B", -40) };
-        conductors.Add(floatingCharge is double q ? Conductor.Floating("C", q) : Conductor.Fixed("C", 25));
+        var conductors = new List<ConductorDefinition> { ConductorDefinition.Fixed("A", 100), ConductorDefinition.Fixed("B", -40) };
+        conductors.Add(floatingCharge is double q ? ConductorDefinition.Floating("C", q) : ConductorDefinition.Fixed("C", 25));
         return new ElectrostaticProblem
         {
             Mesh = mesh,
             Conductors = conductors,
             DepthMetres = 0.2,
-            Materials = new Dictionary<int, Material> { [1] = Material.Dielectric(4.4), [2] = Material.Vacuum },
+            Materials = new Dictionary<int, RegionMaterial> { [1] = RegionMaterial.Dielectric(4.4), [2] = RegionMaterial.Vacuum },
             Boundaries = new Dictionary<int, BoundaryRole>
             {
                 [10] = On(0), [11] = On(1), [12] = On(2),

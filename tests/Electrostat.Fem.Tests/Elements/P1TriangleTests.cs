@@ -27,7 +27,7 @@ public class P1TriangleTests
         // Patch test: for φ = gx·x + gy·y, φᵀKφ = W·(g·εg) exactly (the P1 space contains linear functions).
         Span<double> k = stackalloc double[9];
         var eps = new PermittivityTensor(2.0, 0.3, 1.5);
-        double w = P1Triangle.Weight(Symmetry.Planar, Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5]);
+        double w = P1Triangle.Weight(ProblemSymmetry.Planar, Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5]);
         P1Triangle.Stiffness(Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5], eps, w, k);
         double gx = 0.7, gy = -1.9;
         double[] phi = [gx * Tri[0] + gy * Tri[1], gx * Tri[2] + gy * Tri[3], gx * Tri[4] + gy * Tri[5]];
@@ -45,15 +45,15 @@ public class P1TriangleTests
     public void AxisymmetricWeight_IsExactRWeightedArea()
     {
         // ∫_T 2πr dA = 2π·A·r̄ (Pappus' centroid theorem); compare with the 7-point rule, exact for linear integrands.
-        double w = P1Triangle.Weight(Symmetry.Axisymmetric, Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5]);
+        double w = P1Triangle.Weight(ProblemSymmetry.Axisymmetric, Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5]);
         double q = KelvinWeight.Rule7((r, _) => 2 * Math.PI * r, Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5]);
         Assert.Equal(q, w, 13);
     }
 
     [Theory]
-    [InlineData(Symmetry.Planar)]
-    [InlineData(Symmetry.Axisymmetric)]
-    public void ChargeLoad_MatchesQuadratureOfShapeFunctions(Symmetry symmetry)
+    [InlineData(ProblemSymmetry.Planar)]
+    [InlineData(ProblemSymmetry.Axisymmetric)]
+    public void ChargeLoad_MatchesQuadratureOfShapeFunctions(ProblemSymmetry symmetry)
     {
         // f_i = ∫ρ N_i w dA; N_1 on the triangle is the barycentric coordinate, a linear function we can integrate
         // with the 7-point rule (exact up to degree 5).
@@ -62,7 +62,7 @@ public class P1TriangleTests
         P1Triangle.AddChargeLoad(symmetry, Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5], rho, f);
         double twoA = P1Triangle.TwiceArea(Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5]);
         double N1(double x, double y) => ((Tri[2] * Tri[5] - Tri[4] * Tri[3]) + (Tri[3] - Tri[5]) * x + (Tri[4] - Tri[2]) * y) / twoA;
-        double wt(double x) => symmetry == Symmetry.Planar ? 1 : 2 * Math.PI * x;
+        double wt(double x) => symmetry == ProblemSymmetry.Planar ? 1 : 2 * Math.PI * x;
         double expected = KelvinWeight.Rule7((x, y) => rho * N1(x, y) * wt(x), Tri[0], Tri[1], Tri[2], Tri[3], Tri[4], Tri[5]);
         Assert.Equal(expected, f[0], 13);
     }

@@ -19,7 +19,7 @@ public class ProblemValidationTests
     [Fact]
     public void MissingMaterial_NamesTheRegion()
     {
-        var p = Make(Square, [Conductor.Fixed("lid", 1)], Roles(), new Dictionary<int, Material> { [5] = Material.Vacuum });
+        var p = Make(Square, [ConductorDefinition.Fixed("lid", 1)], Roles(), new Dictionary<int, RegionMaterial> { [5] = RegionMaterial.Vacuum });
         var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(p));
         Assert.Contains("Region 0", ex.Message);
     }
@@ -29,7 +29,7 @@ public class ProblemValidationTests
     {
         var roles = Roles();
         roles.Remove(StructuredMeshes.Left);
-        var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(Make(Square, [Conductor.Fixed("lid", 1)], roles)));
+        var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(Make(Square, [ConductorDefinition.Fixed("lid", 1)], roles)));
         Assert.Contains($"tag {StructuredMeshes.Left}", ex.Message);
     }
 
@@ -38,7 +38,7 @@ public class ProblemValidationTests
     {
         var roles = Roles();
         roles[StructuredMeshes.Left] = Enclosure();
-        var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(Make(Square, [Conductor.Fixed("lid", 1)], roles)));
+        var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(Make(Square, [ConductorDefinition.Fixed("lid", 1)], roles)));
         Assert.Contains("short circuit", ex.Message);
     }
 
@@ -47,7 +47,7 @@ public class ProblemValidationTests
     {
         var roles = Roles();
         roles[StructuredMeshes.Bottom] = Natural;
-        var solver = new FieldSolver(Make(Square, [Conductor.Floating("lid", 1e-9)], roles));
+        var solver = new FieldSolver(Make(Square, [ConductorDefinition.Floating("lid", 1e-9)], roles));
         var ex = Assert.Throws<FieldProblemException>(() => solver.Solve());
         Assert.Contains("undetermined", ex.Message);
     }
@@ -60,7 +60,7 @@ public class ProblemValidationTests
         var mesh = StructuredMeshes.Union(Square, lone);
         var roles = Roles();
         roles[77] = Natural;
-        var solver = new FieldSolver(Make(mesh, [Conductor.Fixed("lid", 1)], roles));
+        var solver = new FieldSolver(Make(mesh, [ConductorDefinition.Fixed("lid", 1)], roles));
         var ex = Assert.Throws<FieldProblemException>(() => solver.Solve());
         Assert.Contains("undetermined", ex.Message);
         Assert.Contains("(5", ex.Message);
@@ -69,14 +69,14 @@ public class ProblemValidationTests
     [Fact]
     public void ConductorWithoutSegments_IsReported()
     {
-        var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(Make(Square, [Conductor.Fixed("lid", 1), Conductor.Fixed("ghost", 2)], Roles())));
+        var ex = Assert.Throws<FieldProblemException>(() => new FieldSolver(Make(Square, [ConductorDefinition.Fixed("lid", 1), ConductorDefinition.Fixed("ghost", 2)], Roles())));
         Assert.Contains("'ghost'", ex.Message);
     }
 
     [Fact]
     public void WarmStartFromTheSolution_ConvergesAtOnce()
     {
-        var solver = new FieldSolver(Make(StructuredMeshes.Rectangle(0, 1, 0, 1, 40, 40), [Conductor.Fixed("lid", 1)], Roles()));
+        var solver = new FieldSolver(Make(StructuredMeshes.Rectangle(0, 1, 0, 1, 40, 40), [ConductorDefinition.Fixed("lid", 1)], Roles()));
         var first = solver.Solve();
         var second = solver.Solve(first.PotentialVolts);
         Assert.True(second.Report.Converged);

@@ -8,15 +8,15 @@ internal static class Problems
 {
     public const double Eps0 = Electrostat.Fem.Elements.PhysicalConstants.VacuumPermittivity;
 
-    public static ElectrostaticProblem Make(TriangleMesh mesh, IReadOnlyList<Conductor> conductors,
-        Dictionary<int, BoundaryRole> roles, Dictionary<int, Material>? materials = null, Symmetry symmetry = Symmetry.Planar) =>
+    public static ElectrostaticProblem Make(TriangleMesh mesh, IReadOnlyList<ConductorDefinition> conductors,
+        Dictionary<int, BoundaryRole> roles, Dictionary<int, RegionMaterial>? materials = null, ProblemSymmetry symmetry = ProblemSymmetry.Planar) =>
         new()
         {
             Mesh = mesh,
             Symmetry = symmetry,
             Conductors = conductors,
             Boundaries = roles,
-            Materials = materials ?? mesh.TriangleRegion.Distinct().ToDictionary(r => r, _ => Material.Vacuum),
+            Materials = materials ?? mesh.TriangleRegion.Distinct().ToDictionary(r => r, _ => RegionMaterial.Vacuum),
         };
 
     public static BoundaryRole On(int conductor) => new ConductorBoundary(conductor);

@@ -10,7 +10,7 @@ public class ClosedFormTests
     private static FieldSolution SolveCoax(double a, double b, int nr, int nth, double offset, double v)
     {
         var mesh = StructuredMeshes.Annulus(a, b, nr, nth, offset, geometric: true);
-        var p = Make(mesh, [Conductor.Fixed("inner", v)], new() { [1] = On(0), [2] = Enclosure() });
+        var p = Make(mesh, [ConductorDefinition.Fixed("inner", v)], new() { [1] = On(0), [2] = Enclosure() });
         return new FieldSolver(p).Solve();
     }
 
@@ -52,9 +52,9 @@ public class ClosedFormTests
         // E_k = V/(εr_k·(d1/εr1 + d2/εr2)) and C' = ε0·w/(d1/εr1 + d2/εr2) (Griffiths §4.4.1, Problem 4.21).
         double w = 2e-3, d1 = 1e-3, d2 = 3e-3, e1 = 4.0, e2 = 1.5, v = 1000;
         var mesh = StructuredMeshes.Rectangle(0, w, 0, d1 + d2, 4, 16, region: (_, y) => y < d1 ? 1 : 2);
-        var p = Make(mesh, [Conductor.Fixed("top", v)],
+        var p = Make(mesh, [ConductorDefinition.Fixed("top", v)],
             new() { [StructuredMeshes.Bottom] = Enclosure(), [StructuredMeshes.Top] = On(0), [StructuredMeshes.Left] = Natural, [StructuredMeshes.Right] = Natural },
-            new() { [1] = Material.Dielectric(e1), [2] = Material.Dielectric(e2) });
+            new() { [1] = RegionMaterial.Dielectric(e1), [2] = RegionMaterial.Dielectric(e2) });
         var sol = new FieldSolver(p).Solve();
         double s = d1 / e1 + d2 / e2;
         for (int t = 0; t < mesh.TriangleCount; t++)
@@ -74,7 +74,7 @@ public class ClosedFormTests
         // Problem 2.47-type spherical capacitor).
         double a = 0.01, b = 0.03, v = 1000;
         var mesh = StructuredMeshes.HalfAnnulusRz(a, b, 64, 256);
-        var p = Make(mesh, [Conductor.Fixed("sphere", v)], new() { [1] = On(0), [2] = Enclosure(), [3] = Natural }, symmetry: Symmetry.Axisymmetric);
+        var p = Make(mesh, [ConductorDefinition.Fixed("sphere", v)], new() { [1] = On(0), [2] = Enclosure(), [3] = Natural }, symmetry: ProblemSymmetry.Axisymmetric);
         var sol = new FieldSolver(p).Solve();
         Assert.True(sol.Report.Converged);
         double exact = 4 * Math.PI * Eps0 * a * b / (b - a);
@@ -104,7 +104,7 @@ public class ClosedFormTests
         // only change a mesh can make to the ideal, discontinuous corner.
         var mesh = StructuredMeshes.Rectangle(0, l, 0, l, n, n,
             sideTag: (x, _, side) => side == StructuredMeshes.Top && (x < h || x > l - h) ? 99 : side);
-        var p = Make(mesh, [Conductor.Fixed("lid", v)], new()
+        var p = Make(mesh, [ConductorDefinition.Fixed("lid", v)], new()
         {
             [StructuredMeshes.Top] = On(0), [99] = Natural,
             [StructuredMeshes.Bottom] = Enclosure(), [StructuredMeshes.Left] = Enclosure(), [StructuredMeshes.Right] = Enclosure(),
@@ -134,7 +134,7 @@ public class ClosedFormTests
         double v = 10;
         var mesh = StructuredMeshes.Rectangle(0, 4, 0, 2, 16, 8,
             interiorTag: (x, y) => Math.Abs(y - 1) < 1e-9 && x > 1 && x < 3 ? 50 : -1);
-        var p = Make(mesh, [Conductor.Fixed("top", v), Conductor.Floating("plate")], new()
+        var p = Make(mesh, [ConductorDefinition.Fixed("top", v), ConductorDefinition.Floating("plate")], new()
         {
             [StructuredMeshes.Top] = On(0), [50] = On(1), [StructuredMeshes.Bottom] = Enclosure(),
             [StructuredMeshes.Left] = Natural, [StructuredMeshes.Right] = Natural,

@@ -21,7 +21,7 @@ public class ConvergenceTests
         foreach (int n in new[] { 6, 12, 24, 48 })
         {
             var mesh = StructuredMeshes.Annulus(a, b, n, 4 * n);
-            var p = Make(mesh, [Conductor.Fixed("inner", v)], new() { [1] = On(0), [2] = Enclosure() });
+            var p = Make(mesh, [ConductorDefinition.Fixed("inner", v)], new() { [1] = On(0), [2] = Enclosure() });
             var sol = new FieldSolver(p, new FieldSolverOptions { RelativeTolerance = 1e-12 }).Solve();
             cErr.Add(Math.Abs(sol.Conductors[0].ChargeCoulombs / v - exactC) / exactC);
             // ‖∇(u − u_h)‖² integrated with the 7-point rule; ∇u = −V/(ln(b/a)·r²)·(x, y).
@@ -56,7 +56,7 @@ public class ConvergenceTests
         foreach (int n in new[] { 32, 64, 128, 256 })
         {
             var mesh = StructuredMeshes.Rectangle(0, 1, 0, 1, n, n, crissCross: false);
-            var p = Make(mesh, [Conductor.Fixed("lid", 1)], new()
+            var p = Make(mesh, [ConductorDefinition.Fixed("lid", 1)], new()
             {
                 [StructuredMeshes.Top] = On(0), [StructuredMeshes.Bottom] = Enclosure(),
                 [StructuredMeshes.Left] = Natural, [StructuredMeshes.Right] = Natural,

@@ -42,8 +42,8 @@ public class MesherIntegrationTests
         var p = new ElectrostaticProblem
         {
             Mesh = mesh,
-            Conductors = [Conductor.Fixed("A", 1), Conductor.Fixed("B", 0)],
-            Materials = new Dictionary<int, Material> { [0] = Material.Vacuum, [1] = Material.Vacuum },
+            Conductors = [ConductorDefinition.Fixed("A", 1), ConductorDefinition.Fixed("B", 0)],
+            Materials = new Dictionary<int, RegionMaterial> { [0] = RegionMaterial.Vacuum, [1] = RegionMaterial.Vacuum },
             Boundaries = new Dictionary<int, BoundaryRole> { [CylinderA] = On(0), [CylinderB] = On(1) },
             OpenBoundary = new KelvinOpenBoundary(InteriorArc, ExteriorArc, 1, radius, 0, 0, cx, 0),
         };
@@ -104,9 +104,9 @@ public class MesherIntegrationTests
         var p = new ElectrostaticProblem
         {
             Mesh = mesh,
-            Symmetry = Symmetry.Axisymmetric,
-            Conductors = [Conductor.Fixed("sphere", 1)],
-            Materials = new Dictionary<int, Material> { [0] = Material.Vacuum, [1] = Material.Vacuum },
+            Symmetry = ProblemSymmetry.Axisymmetric,
+            Conductors = [ConductorDefinition.Fixed("sphere", 1)],
+            Materials = new Dictionary<int, RegionMaterial> { [0] = RegionMaterial.Vacuum, [1] = RegionMaterial.Vacuum },
             Boundaries = new Dictionary<int, BoundaryRole> { [sphere] = On(0), [axis] = Natural, [axis + 10] = Natural },
             OpenBoundary = new KelvinOpenBoundary(InteriorArc, ExteriorArc, 1, radius, 0, 0, 0, zc),
         };

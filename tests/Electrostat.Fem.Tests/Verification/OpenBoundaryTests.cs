@@ -20,9 +20,9 @@ public class OpenBoundaryTests
         return new ElectrostaticProblem
         {
             Mesh = mesh,
-            Symmetry = Symmetry.Axisymmetric,
-            Conductors = [Conductor.Fixed("sphere", 1.0)],
-            Materials = new Dictionary<int, Material> { [0] = Material.Vacuum, [1] = Material.Vacuum },
+            Symmetry = ProblemSymmetry.Axisymmetric,
+            Conductors = [ConductorDefinition.Fixed("sphere", 1.0)],
+            Materials = new Dictionary<int, RegionMaterial> { [0] = RegionMaterial.Vacuum, [1] = RegionMaterial.Vacuum },
             Boundaries = new Dictionary<int, BoundaryRole> { [1] = On(0), [3] = Natural, [13] = Natural },
             OpenBoundary = new KelvinOpenBoundary(2, 12, 1, radius, 0, 0, 0, zc),
         };

@@ -15,8 +15,8 @@ public class PoissonAndAnisotropyTests
         // conductors add up to −ρ·π(b² − a²) per metre.
         double a = 0.01, b = 0.03, rho = 1e-6, eps = Eps0 * 2.0;
         var mesh = StructuredMeshes.Annulus(a, b, 48, 256);
-        var p = Make(mesh, [Conductor.Fixed("inner", 0)], new() { [1] = On(0), [2] = Enclosure() },
-            new() { [0] = new Material(PermittivityTensor.Isotropic(2.0), rho) });
+        var p = Make(mesh, [ConductorDefinition.Fixed("inner", 0)], new() { [1] = On(0), [2] = Enclosure() },
+            new() { [0] = new RegionMaterial(PermittivityTensor.Isotropic(2.0), rho) });
         var sol = new FieldSolver(p).Solve();
         double k = -rho / (4 * eps);
         double aa = -k * (b * b - a * a) / Math.Log(b / a);
@@ -42,8 +42,8 @@ public class PoissonAndAnisotropyTests
         // the induced charges add up to −ρ·(4π/3)(b³ − a³). Exercises the exact axisymmetric load vector.
         double a = 0.01, b = 0.02, rho = 1e-6;
         var mesh = StructuredMeshes.HalfAnnulusRz(a, b, 32, 128);
-        var p = Make(mesh, [Conductor.Fixed("inner", 0)], new() { [1] = On(0), [2] = Enclosure(), [3] = Natural },
-            new() { [0] = new Material(PermittivityTensor.Isotropic(1.0), rho) }, Symmetry.Axisymmetric);
+        var p = Make(mesh, [ConductorDefinition.Fixed("inner", 0)], new() { [1] = On(0), [2] = Enclosure(), [3] = Natural },
+            new() { [0] = new RegionMaterial(PermittivityTensor.Isotropic(1.0), rho) }, ProblemSymmetry.Axisymmetric);
         var sol = new FieldSolver(p).Solve();
         double k = -rho / (6 * Eps0);
         // φ(a) = φ(b) = 0: k a² + A/a + B = 0, k b² + A/b + B = 0.
@@ -70,11 +70,11 @@ public class PoissonAndAnisotropyTests
         // ε = diag(εxx, εyy) the capacitance is ε0·εyy·w/d whatever εxx is (D = ε·E componentwise).
         double w = 2e-3, d = 1e-3, v = 5;
         var mesh = StructuredMeshes.Rectangle(0, w, 0, d, 6, 4, crissCross: false);
-        var p = Make(mesh, [Conductor.Fixed("top", v)], new()
+        var p = Make(mesh, [ConductorDefinition.Fixed("top", v)], new()
         {
             [StructuredMeshes.Bottom] = Enclosure(), [StructuredMeshes.Top] = On(0),
             [StructuredMeshes.Left] = Natural, [StructuredMeshes.Right] = Natural,
-        }, new() { [0] = new Material(new PermittivityTensor(7.0, 0, 2.5)) });
+        }, new() { [0] = new RegionMaterial(new PermittivityTensor(7.0, 0, 2.5)) });
         var sol = new FieldSolver(p).Solve();
         Assert.Equal(1, sol.Conductors[0].ChargeCoulombs / v / (Eps0 * 2.5 * w / d), 9);
     }

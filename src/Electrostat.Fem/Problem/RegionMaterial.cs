@@ -7,12 +7,12 @@ namespace Electrostat.Fem.Problem;
 /// </remarks>
 /// <param name="Permittivity">Relative permittivity (dimensionless), isotropic or a symmetric tensor.</param>
 /// <param name="ChargeDensityCoulombsPerCubicMetre">Free volume charge density ρ in C/m³ (0 for none).</param>
-public sealed record Material(PermittivityTensor Permittivity, double ChargeDensityCoulombsPerCubicMetre = 0)
+public sealed record RegionMaterial(PermittivityTensor Permittivity, double ChargeDensityCoulombsPerCubicMetre = 0)
 {
     /// <summary>A charge-free isotropic dielectric.</summary>
     /// <param name="relativePermittivity">εr, dimensionless.</param>
-    public static Material Dielectric(double relativePermittivity) => new(PermittivityTensor.Isotropic(relativePermittivity));
+    public static RegionMaterial Dielectric(double relativePermittivity) => new(PermittivityTensor.Isotropic(relativePermittivity));
 
     /// <summary>Vacuum (or air, to the accuracy electrostatic design needs): εr = 1.</summary>
-    public static Material Vacuum { get; } = Dielectric(1.0);
+    public static RegionMaterial Vacuum { get; } = Dielectric(1.0);
 }

@@ -8,11 +8,11 @@ namespace Electrostat.Fem.Problem;
 /// <remarks>
 /// A floating conductor's surface nodes all share one unknown potential (degrees of freedom merged, not a penalty),
 /// and its net charge enters as a right-hand-side entry of that unknown. Charge is per metre of depth for planar
-/// problems and total for axisymmetric ones (see <see cref="Symmetry"/>).
+/// problems and total for axisymmetric ones (see <see cref="ProblemSymmetry"/>).
 /// </remarks>
-public sealed record Conductor
+public sealed record ConductorDefinition
 {
-    private Conductor(string name, bool isFloating, double potentialVolts, double chargeCoulombs)
+    private ConductorDefinition(string name, bool isFloating, double potentialVolts, double chargeCoulombs)
     {
         Name = name;
         IsFloating = isFloating;
@@ -23,21 +23,21 @@ public sealed record Conductor
     /// <summary>A conductor held at a fixed potential.</summary>
     /// <param name="name">Name shown in reports.</param>
     /// <param name="potentialVolts">Its potential, volts.</param>
-    public static Conductor Fixed(string name, double potentialVolts)
+    public static ConductorDefinition Fixed(string name, double potentialVolts)
     {
         ArgumentException.ThrowIfNullOrWhiteSpace(name);
         if (!double.IsFinite(potentialVolts)) throw new ArgumentOutOfRangeException(nameof(potentialVolts), $"Conductor '{name}': the potential must be a finite number of volts.");
-        return new Conductor(name, false, potentialVolts, 0);
+        return new ConductorDefinition(name, false, potentialVolts, 0);
     }
 
     /// <summary>A floating conductor carrying a given net charge (default 0).</summary>
     /// <param name="name">Name shown in reports.</param>
     /// <param name="chargeCoulombs">Net charge: C/m for planar problems, C for axisymmetric ones.</param>
-    public static Conductor Floating(string name, double chargeCoulombs = 0)
+    public static ConductorDefinition Floating(string name, double chargeCoulombs = 0)
     {
         ArgumentException.ThrowIfNullOrWhiteSpace(name);
         if (!double.IsFinite(chargeCoulombs)) throw new ArgumentOutOfRangeException(nameof(chargeCoulombs), $"Conductor '{name}': the charge must be a finite number of coulombs.");
-        return new Conductor(name, true, 0, chargeCoulombs);
+        return new ConductorDefinition(name, true, 0, chargeCoulombs);
     }
 
     /// <summary>Name shown in reports.</summary>

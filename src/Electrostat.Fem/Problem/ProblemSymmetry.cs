@@ -12,7 +12,7 @@ namespace Electrostat.Fem.Problem;
 /// (no field crosses it), which holds by symmetry.</item>
 /// </list>
 /// </remarks>
-public enum Symmetry
+public enum ProblemSymmetry
 {
     /// <summary>Planar cross-section, results per metre of depth.</summary>
     Planar = 0,
