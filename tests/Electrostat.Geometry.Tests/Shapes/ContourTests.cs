@@ -88,4 +88,35 @@ public class ContourTests
         Assert.Equal(c.Perimeter, r.Perimeter, 1e-12);
         Assert.Equal(c.Bounds.MinX, r.Bounds.MinX, 1e-15);
     }
+
+    [Fact]
+    public void Segments_PointAtAndTangentAt_FollowArcLength()
+    {
+        var line = new LineSegment(new Point2(1, 1), new Point2(4, 5));
+        Assert.Equal(new Point2(2.5, 3), line.PointAt(0.5));
+        Assert.Equal(5, line.Length, 1e-15);
+        Assert.Equal(0.6, line.TangentAt(0.3).X, 1e-15);
+        // Clockwise quarter arc from angle π/2 to 0 around (0, 0), radius 2: midpoint at 45°, tangent pointing down-right.
+        var arc = new ArcSegment(new Point2(0, 0), 2, Math.PI / 2, -Math.PI / 2);
+        var mid = arc.PointAt(0.5);
+        Assert.Equal(Math.Sqrt(2), mid.X, 1e-14);
+        Assert.Equal(Math.Sqrt(2), mid.Y, 1e-14);
+        var t = arc.TangentAt(0.5);
+        Assert.Equal(Math.Sqrt(0.5), t.X, 1e-14);
+        Assert.Equal(-Math.Sqrt(0.5), t.Y, 1e-14);
+        Assert.Equal(Math.PI, arc.Length, 1e-14); // r |Δθ|
+        Assert.Equal(new Point2(2, 0).X, arc.End.X, 1e-15);
+    }
+
+    [Fact]
+    public void Flatten_RespectsMaximumPieceLength()
+    {
+        var c = ShapeFactory.Rectangle(new Point2(0, 0), new Point2(10, 3), 1);
+        var pts = c.Flatten(1e-3, 0.4);
+        for (int i = 0; i < pts.Count; i++)
+            Assert.True(pts[i].DistanceTo(pts[(i + 1) % pts.Count]) <= 0.4 + 1e-12);
+        // Every segment end is kept as a vertex, so fillet tangency points survive flattening exactly.
+        foreach (var seg in c.Segments)
+            Assert.Contains(pts, p => p.DistanceTo(seg.Start) < 1e-15);
+    }
 }
