@@ -126,7 +126,7 @@ public static class FieldRecovery
         }
 
         // Zienkiewicz–Zhu indicator with the edge-midpoint rule (exact for quadratics: planar case exact).
-        bool axi = solution.Problem.Symmetry == Symmetry.Axisymmetric;
+        bool axi = solution.Problem.Symmetry == ProblemSymmetry.Axisymmetric;
         var err = new double[nt];
         double norm = 0;
         var materials = solution.Problem.Materials;

@@ -1,0 +1,139 @@
+using System.Globalization;
+using Electrostat.Analysis.Clearance;
+using Electrostat.Geometry.Model;
+using Electrostat.Geometry.Shapes;
+
+namespace Electrostat.Analysis.Corners;
+
+/// <summary>
+/// Finds conductor corners with a field-side angle above 180° and no fillet, and reports the field near each.
+/// </summary>
+/// <remarks>
+/// <para>Detection is on the exact geometry: where two pieces of a conductor outline meet with a jump of tangent
+/// direction (more than <see cref="SmoothTurnRadians"/>), the field-side angle is β = π + turn for conductors (their
+/// material lies left of the counter-clockwise outline, the field on the right) and β = π − turn for the enclosure
+/// wall (field inside). Corners with β ≤ 180° + 0.5° are not singular. Skipped: corners lying on the enclosure wall
+/// (the wall or a mirror plane changes the angle), enclosure corners next to a symmetry plane or the axis, and corners
+/// whose field side is not a meshed region (inside another conductor or outside).</para>
+/// <para>Rules (our own, documented here): the report distance is δ = <see cref="ReportDistanceFraction"/> × the local
+/// gap (distance from the corner to the nearest conductor at another potential); the suggested fillet radius is
+/// <see cref="FilletFraction"/> × the local gap, capped at half the shorter edge at the corner. A tenth of the gap
+/// keeps the clearance almost unchanged while making the peak finite, so that it converges and can be checked.</para>
+/// </remarks>
+public static class SingularCornerDetector
+{
+    /// <summary>Tangent turns below this are treated as smooth joins (fillet tangency), radians.</summary>
+    public const double SmoothTurnRadians = 1e-6;
+
+    /// <summary>δ as a fraction of the local gap.</summary>
+    public const double ReportDistanceFraction = 0.05;
+
+    /// <summary>Suggested fillet radius as a fraction of the local gap.</summary>
+    public const double FilletFraction = 0.1;
+
+    private const double MinExcessRadians = 0.5 * Math.PI / 180;
+
+    /// <summary>Detects the singular corners of a solved design and evaluates the recovered field near each.</summary>
+    /// <param name="context">The analysis context.</param>
+    /// <returns>The corners in design order.</returns>
+    public static IReadOnlyList<SingularCorner> Detect(AnalysisContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var outlines = ConductorOutline.Of(context.Design, context.ConductorPotentialVolts);
+        var corners = FindCorners(context.Design);
+        var topo = context.Topology;
+        var mesh = context.Mesh;
+        var list = new List<SingularCorner>();
+        foreach (var c in corners)
+        {
+            var own = outlines.First(o => o.ConductorIndex == c.ConductorIndex);
+            double gap = double.PositiveInfinity;
+            foreach (var o in outlines)
+            {
+                if (o == own || !(Math.Abs(o.PotentialVolts - own.PotentialVolts) > 0)) continue;
+                gap = Math.Min(gap, o.DistanceTo(c.Location).Distance);
+            }
+            if (!double.IsFinite(gap)) gap = context.Design.Bounds.Diagonal;
+            double delta = ReportDistanceFraction * gap;
+            double fillet = Math.Min(FilletFraction * gap, 0.5 * c.ShorterEdgeMetres);
+            double px = c.Location.X + delta * c.BisectorX, py = c.Location.Y + delta * c.BisectorY;
+            double? field = null;
+            string? material = null;
+            if (context.Recovered.TryEvaluate(px, py, out double ex, out double ey, out int t))
+            {
+                field = Math.Sqrt(ex * ex + ey * ey);
+                material = context.MaterialOfRegion(mesh.TriangleRegion[t])?.Name;
+            }
+            // Mesh size at the corner: the nearest vertex's mean edge length.
+            double h = double.PositiveInfinity, best = double.PositiveInfinity;
+            for (int v = 0; v < mesh.VertexCount; v++)
+            {
+                double d = Sq(mesh.X[v] - c.Location.X) + Sq(mesh.Y[v] - c.Location.Y);
+                if (d < best) { best = d; h = topo.LocalSizeMetres[v]; }
+            }
+            bool resolved = h <= 0.5 * delta;
+            double betaDeg = c.FieldSideAngleRadians * 180 / Math.PI;
+            double exponent = Math.PI / c.FieldSideAngleRadians - 1;
+            var inv = CultureInfo.InvariantCulture;
+            string fieldText = field is double f
+                ? string.Format(inv, "|E| = {0:G4} kV/mm at {1:G3} mm from the corner on the bisector{2}", f * 1e-6, delta * 1e3,
+                    resolved ? "" : " (mesh coarser than that distance: refine for a resolved value)")
+                : "the field near it could not be evaluated";
+            string warning = string.Format(inv,
+                "Sharp corner of '{0}' at {1}: the field-side angle is {2:F0}°, so the exact field is infinite there (it grows as r^{3:F3}) and any peak value at the corner is mesh-dependent; {4}. Round the corner with a fillet of about {5:G3} mm (a tenth of the local gap of {6:G3} mm).",
+                c.ConductorName, c.Location.ToMillimetreString(), betaDeg, exponent, fieldText, fillet * 1e3, gap * 1e3);
+            list.Add(new SingularCorner(c.ConductorName, c.ConductorIndex, c.Location, betaDeg, exponent, gap, fillet, delta, field, material, resolved, warning));
+        }
+        return list;
+    }
+
+    /// <summary>The sharp re-entrant corners of a design's exact geometry.</summary>
+    internal static List<CornerGeometry> FindCorners(Design design)
+    {
+        var result = new List<CornerGeometry>();
+        var wall = design.Enclosure.Shape;
+        double diag = design.Bounds.Diagonal;
+        for (int k = 0; k < design.Conductors.Count; k++)
+        {
+            var conductor = design.Conductors[k];
+            foreach (var contour in conductor.Shape.Contours)
+                Scan(design, contour, conductor.Name, k, fieldOnLeft: false, wall, diag, result);
+        }
+        foreach (var contour in wall.Contours)
+            Scan(design, contour, ConductorOutline.EnclosureName, -1, fieldOnLeft: true, wall, diag, result);
+        return result;
+    }
+
+    private static void Scan(Design design, Contour contour, string name, int index, bool fieldOnLeft, Shape wall, double diag, List<CornerGeometry> result)
+    {
+        var segs = contour.Segments;
+        int n = segs.Count;
+        for (int i = 0; i < n; i++)
+        {
+            var a = segs[i];
+            var b = segs[(i + 1) % n];
+            if (fieldOnLeft && (a.Marker != BoundaryMarker.None || b.Marker != BoundaryMarker.None)) continue;
+            var tin = a.TangentAt(1);
+            var tout = b.TangentAt(0);
+            double turn = Math.Atan2(Point2.Cross(tin, tout), Point2.Dot(tin, tout));
+            if (Math.Abs(turn) < SmoothTurnRadians) continue;
+            double beta = fieldOnLeft ? Math.PI - turn : Math.PI + turn;
+            if (beta <= Math.PI + MinExcessRadians) continue;
+            var p = a.End;
+            if (!fieldOnLeft && wall.BoundaryDistanceTo(p) < 1e-7 * diag) continue;
+            // Bisector of the field side: rotate the first bounding ray counter-clockwise by β/2. For conductors the
+            // field side runs from the incoming ray (−t_in) round to t_out; for the wall from t_out round to −t_in.
+            var ray = fieldOnLeft ? tout : new Point2(-tin.X, -tin.Y);
+            double half = 0.5 * beta;
+            double bx = ray.X * Math.Cos(half) - ray.Y * Math.Sin(half);
+            double by = ray.X * Math.Sin(half) + ray.Y * Math.Cos(half);
+            double shorter = Math.Min(a.Length, b.Length);
+            double probe = 1e-4 * shorter;
+            var hit = design.Classify(p.X + probe * bx, p.Y + probe * by);
+            if (hit.Kind is not (RegionKind.Dielectric or RegionKind.Background)) continue;
+            result.Add(new CornerGeometry(name, index, p, bx, by, beta, shorter));
+        }
+    }
+
+    private static double Sq(double v) => v * v;
+}
