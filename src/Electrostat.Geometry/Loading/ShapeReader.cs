@@ -307,14 +307,14 @@ internal sealed class ShapeReader(ReadContext ctx)
     private bool CheckHoles(Contour outer, List<Contour> holes, JArray tokens, string what)
     {
         double tol = 1e-7 * outer.Bounds.Diagonal;
-        var outerPoly = NtsShapes.ToPolygon(outer, tol);
+        var outerPoly = NetTopologySuite.Geometries.Prepared.PreparedGeometryFactory.Prepare(NtsShapes.ToPolygon(outer, tol));
         var polys = holes.Select(h => NtsShapes.ToPolygon(h, tol)).ToList();
         bool ok = true;
         for (int k = 0; k < polys.Count; k++)
         {
-            if (!outerPoly.Contains(polys[k]))
+            if (!outerPoly.ContainsProperly(polys[k]))
             {
-                Sink.Error(tokens[k], $"hole {k} of {what} is not inside its outline", "move or shrink the hole so it lies strictly inside",
+                Sink.Error(tokens[k], $"hole {k} of {what} is not inside its outline", "move or shrink the hole so it lies strictly inside (not touching the outline)",
                     NtsShapes.ToPoint(polys[k].InteriorPoint.Coordinate));
                 ok = false;
             }

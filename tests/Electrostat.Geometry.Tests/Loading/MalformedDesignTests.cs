@@ -59,6 +59,7 @@ public class MalformedDesignTests
         ["charge-on-fixed"] = new([("\"potential\": \"10 kV\"", "\"potential\": \"10 kV\", \"charge\": \"1 nC\"")], "\"charge\" is only allowed on a floating conductor", null, false),
         ["symmetry-plane-off-edge"] = new([("\"potential\": 0 }", "\"potential\": 0, \"symmetry_planes\": [{ \"x\": 10 }] }")], "no straight enclosure edge lies on x = 10 mm", "{ \"x\": 10 }", true),
         ["hole-outside"] = new([("\"max\": [30, 30] }", "\"max\": [30, 30], \"holes\": [{ \"type\": \"circle\", \"center\": [40, 25], \"radius\": 2 }] }")], "hole 0 of dielectric \"block\" is not inside its outline", "{ \"type\": \"circle\", \"center\": [40", true),
+        ["hole-touching-outline"] = new([("\"max\": [30, 30] }", "\"max\": [30, 30], \"holes\": [{ \"type\": \"circle\", \"center\": [28, 25], \"radius\": 2 }] }")], "is not inside its outline", "{ \"type\": \"circle\", \"center\": [28", true),
         ["depth-in-axisymmetric"] = new([("\"planar\",", "\"axisymmetric\", \"depth\": 10,")], "\"depth\" applies to planar designs only", "\"depth\"", true),
         ["reserved-parameter"] = new([("\"gap\": 5", "\"mm\": 5")], "parameter name \"mm\" is reserved", "\"mm\": 5", true),
         ["unknown-key-after-empty-list"] = new([("\"conductors\": [", "\"conductors\": [], \"unused\": [")], "unknown key \"unused\"", "\"unused\"", true),
