@@ -13,23 +13,25 @@ namespace Electrostat.Numerics.Multigrid;
 /// <remarks>
 /// <para>Setup per level: strength of connection and aggregation (<see cref="AmgOptions.StrengthThreshold"/>),
 /// tentative prolongator from the constant near-null-space vector, Jacobi-smoothed prolongator
-/// P = (I − ω·D⁻¹A)·T, restriction R = Pᵀ and the Galerkin coarse matrix A_c = Pᵀ·A·P by two sparse products.
-/// The coarsest level (≤ <see cref="AmgOptions.CoarsestRows"/> rows) is factorised densely.</para>
-/// <para>Apply: one V-cycle with ℓ1 hybrid Gauss–Seidel, forward sweeps before and backward sweeps after the
-/// coarse correction. Its error propagator is then (I − M⁻ᵀA)(I − P·E_c·PᵀA)(I − M⁻¹A), with E_c the coarse
+/// P = (I − ω·D⁻¹A)·T with ω from a power-iteration estimate of ρ(D⁻¹A), restriction R = Pᵀ and the Galerkin
+/// coarse matrix A_c = Pᵀ·A·P (formed row by row, no A·P intermediate). The cycle then uses single-precision
+/// copies of A_l, P and R (see <c>PackedCsr</c>). The coarsest level (≤ <see cref="AmgOptions.CoarsestRows"/>
+/// rows) is factorised densely.</para>
+/// <para>Apply: one V-cycle with ℓ1 hybrid Gauss–Seidel (<see cref="AmgOptions.Sweeps"/> forward sweeps before and
+/// as many backward sweeps after the coarse correction). Its error propagator is then (I − M⁻ᵀA)(I − P·E_c·PᵀA)(I − M⁻¹A), with E_c the coarse
 /// cycle, which is A-self-adjoint; the cycle is therefore a symmetric preconditioner, and positive definite
 /// whenever the smoother converges in the A-norm, which the ℓ1 diagonal guarantees.</para>
 /// <para>Not thread-safe: work vectors are kept per level, so one instance runs one V-cycle at a time.</para>
 /// </remarks>
 public sealed class SmoothedAggregationAmg : IPreconditioner
 {
-    private readonly Level[] _levels;
     /// <summary>Largest last level that is factorised densely (rows); beyond it the last level is only relaxed.</summary>
     private const int MaxDenseRows = 3000;
 
     /// <summary>Symmetric sweep pairs on a last level too large to factorise.</summary>
     private const int CoarseSweeps = 4;
 
+    private readonly Level[] _levels;
     private readonly DenseCoarseSolver? _coarse;
     private readonly int _sweeps;
 
