@@ -25,8 +25,11 @@ namespace Electrostat.Numerics.Multigrid;
 /// </remarks>
 public sealed class SmoothedAggregationAmg : IPreconditioner
 {
-    /// <summary>Largest last level that is factorised densely (rows); beyond it the last level is only relaxed.</summary>
-    private const int MaxDenseRows = 3000;
+    /// <summary>
+    /// Largest last level that is factorised densely (rows; a dense Cholesky factor of 1,200 rows costs about 0.6
+    /// GFlop and 11 MB); beyond it the last level is only relaxed.
+    /// </summary>
+    private const int MaxDenseRows = 1200;
 
     /// <summary>Symmetric sweep pairs on a last level too large to factorise.</summary>
     private const int CoarseSweeps = 4;
