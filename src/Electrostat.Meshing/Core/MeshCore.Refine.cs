@@ -38,6 +38,7 @@ internal sealed partial class MeshCore
     private int[] _forced = new int[16];
     private int _forcedCount;
     private int[] _enc = new int[48];
+    private byte _lastSplitFailure;
 
     internal int SkipSmallAngle, SkipProtected, SkipTiny, SkipDegenerate;
 
@@ -261,7 +262,7 @@ internal sealed partial class MeshCore
             int seg = TS[blocked];
             if (seg < 0) { TSkip[t] = SkipReason.Degenerate; SkipDegenerate++; return; }
             if (_segProtected[seg]) { TSkip[t] = SkipReason.ProtectedSegment; SkipProtected++; return; }
-            if (!SplitSubsegment(blocked)) { TSkip[t] = SkipReason.TinyFeature; return; }
+            if (!SplitSubsegment(blocked)) { TSkip[t] = _lastSplitFailure; return; }
             Requeue(t, forced);
             return;
         }
@@ -290,6 +291,7 @@ internal sealed partial class MeshCore
                 int code = FindEdge(enc[k], enc[k + 1]);
                 if (code < 0 || TS[code] != enc[k + 2]) continue;
                 if (SplitSubsegment(code)) split = true;
+                else reason = _lastSplitFailure;
             }
             if (split) Requeue(t, forced);
             else
@@ -322,7 +324,9 @@ internal sealed partial class MeshCore
     {
         int seg = TS[code];
         Debug.Assert(seg >= 0, "Only constrained edges are split as subsegments.");
+        _lastSplitFailure = SkipReason.ProtectedSegment;
         if (_segProtected[seg]) return false;
+        _lastSplitFailure = SkipReason.TinyFeature;
         int t = code / 3, e = code - 3 * t, b = 3 * t;
         int a = TV[b + Next(e)], c = TV[b + Prev(e)];
         double ex = X[c] - X[a], ey = Y[c] - Y[a];
@@ -341,7 +345,7 @@ internal sealed partial class MeshCore
         if (frac == 0.5) { mx = 0.5 * (X[a] + X[c]); my = 0.5 * (Y[a] + Y[c]); }
         if ((mx == X[a] && my == Y[a]) || (mx == X[c] && my == Y[c])) { SkipTiny++; return false; }
         int n = TN[code];
-        if (!FindCavity(mx, my, t, n >= 0 ? n / 3 : -1, code, n)) { SkipDegenerate++; return false; }
+        if (!FindCavity(mx, my, t, n >= 0 ? n / 3 : -1, code, n)) { SkipDegenerate++; _lastSplitFailure = SkipReason.Degenerate; return false; }
         int m = AddVertex(mx, my, KindSegment, seg);
         CommitCavity(m, a, c, seg);
         AfterInsert();
