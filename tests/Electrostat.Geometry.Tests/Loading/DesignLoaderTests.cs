@@ -205,4 +205,14 @@ public class DesignLoaderTests
         Assert.Equal(6e-3, gap, d.Regions.ChordToleranceMetres); // flattened arcs: within the chord tolerance
         Assert.Equal(2, d.Electrodes.Count);
     }
+
+    [Theory]
+    [InlineData("5.001", false)] // 1 um gap in a 141 mm diagonal box: a gap (contact tolerance 1e-6 of the diagonal)
+    [InlineData("5.00001", true)] // 10 nm: contact
+    public void ContactTolerance_SeparatesThinGapsFromContacts(string centerY, bool shorted)
+    {
+        string text = DesignTexts.With(("\"center\": [0, 10]", $"\"center\": [0, {centerY}]"));
+        var result = DesignLoader.LoadFromText(text);
+        Assert.Equal(shorted, result.Errors.Any(e => e.Message.Contains("short circuit", StringComparison.Ordinal)));
+    }
 }
