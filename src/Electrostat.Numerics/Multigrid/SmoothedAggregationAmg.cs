@@ -15,7 +15,7 @@ namespace Electrostat.Numerics.Multigrid;
 /// tentative prolongator from the constant near-null-space vector, Jacobi-smoothed prolongator
 /// P = (I − ω·D⁻¹A)·T with ω from a power-iteration estimate of ρ(D⁻¹A), restriction R = Pᵀ and the Galerkin
 /// coarse matrix A_c = Pᵀ·A·P (formed row by row, no A·P intermediate). The cycle then uses single-precision
-/// copies of A_l, P and R (see <c>PackedCsr</c>). The coarsest level (≤ <see cref="AmgOptions.CoarsestRows"/>
+/// copies of A_l and P (see <c>PackedCsr</c>); restriction by Pᵀ is fused with the residual computation. The coarsest level (≤ <see cref="AmgOptions.CoarsestRows"/>
 /// rows) is factorised densely.</para>
 /// <para>Apply: one V-cycle with ℓ1 hybrid Gauss–Seidel (<see cref="AmgOptions.Sweeps"/> forward sweeps before and
 /// as many backward sweeps after the coarse correction). Its error propagator is then (I − M⁻ᵀA)(I − P·E_c·PᵀA)(I − M⁻¹A), with E_c the coarse
@@ -102,7 +102,7 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
             {
                 // Gershgorin is a safe but loose bound on P1 and coarse SA matrices (often 20-60 % high), which
                 // under-smooths the prolongator and costs CG iterations; the power estimate is never allowed above it.
-                rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(a, diagonal, work.Residual, work.Solution, options.SpectralRadiusIterations));
+                rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(a, diagonal, work.RightHandSide, work.Solution, options.SpectralRadiusIterations));
             }
             double omega = options.ProlongatorDamping / rho;
             // The prolongator is smoothed with A itself, not with the filtered matrix of Vaněk et al. (§3, weak
@@ -114,9 +114,8 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
             var r = p.Transpose();
             var coarse = GalerkinProduct.Compute(r, a, p);
             var packedP = new PackedCsr(p);
-            var packedR = new PackedCsr(r);
             var packed = new PackedCsr(a);
-            work.Complete(packed, packedP, packedR, new HybridGaussSeidel(packed));
+            work.Complete(packed, packedP, new HybridGaussSeidel(packed));
             levels.Add(work);
             a = coarse;
             theta *= 0.5;
@@ -133,7 +132,7 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
         else
         {
             var packed = new PackedCsr(a);
-            last.Complete(packed, null, null, new HybridGaussSeidel(packed));
+            last.Complete(packed, null, new HybridGaussSeidel(packed));
         }
         levels.Add(last);
         var stats = new AmgHierarchyStats
@@ -185,8 +184,7 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
         {
             smoother.Forward(b, x);
         }
-        level.Packed!.Residual(b, x, level.Residual);
-        level.R!.Multiply(level.Residual, next.RightHandSide);
+        level.Packed!.ResidualRestrict(b, x, level.P!, next.RightHandSide, level.RestrictionPartials!);
         Cycle(l + 1, next.RightHandSide, next.Solution);
         level.P!.MultiplyAdd(next.Solution, x);
         for (int s = 0; s < _sweeps; s++)
@@ -210,21 +208,27 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
 
         public PackedCsr? P { get; private set; }
 
-        public PackedCsr? R { get; private set; }
+        /// <summary>Per-worker coarse vectors for the fused residual-restriction.</summary>
+        public double[][]? RestrictionPartials { get; private set; }
 
         public HybridGaussSeidel? Smoother { get; private set; }
-
-        public double[] Residual { get; } = new double[a.Rows];
 
         public double[] RightHandSide { get; } = new double[a.Rows];
 
         public double[] Solution { get; } = new double[a.Rows];
 
-        public void Complete(PackedCsr packed, PackedCsr? p, PackedCsr? r, HybridGaussSeidel smoother)
+        public void Complete(PackedCsr packed, PackedCsr? p, HybridGaussSeidel smoother)
         {
             Packed = packed;
+            if (p is not null && packed.Workers > 1)
+            {
+                RestrictionPartials = new double[packed.Workers][];
+                for (int k = 0; k < packed.Workers; k++)
+                {
+                    RestrictionPartials[k] = new double[p.Columns];
+                }
+            }
             P = p;
-            R = r;
             Smoother = smoother;
         }
     }

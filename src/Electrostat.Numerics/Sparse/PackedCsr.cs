@@ -56,6 +56,65 @@ internal sealed class PackedCsr
     /// <summary>r ← b − A·x.</summary>
     public void Residual(double[] b, double[] x, double[] r) => Run((s, e) => ResidualRows(b, x, r, s, e));
 
+    /// <summary>
+    /// Fused residual and restriction: c ← Pᵀ·(b − A·x) without storing the residual, where
+    /// <paramref name="prolongator"/> (fine × coarse) is read row by row alongside A. Each worker scatters into its
+    /// own coarse vector from <paramref name="partials"/> (one per worker, coarse length) and they are summed in
+    /// worker order, so the result does not depend on thread timing. Saves writing and re-reading the fine
+    /// residual and reading a separate restriction matrix.
+    /// </summary>
+    public void ResidualRestrict(double[] b, double[] x, PackedCsr prolongator, double[] coarse, double[][] partials)
+    {
+        int parts = _partition.Count;
+        if (parts == 1)
+        {
+            Array.Clear(coarse);
+            ResidualRestrictRows(b, x, prolongator, coarse, 0, Rows);
+            return;
+        }
+        Parallel.For(0, parts, k =>
+        {
+            var local = partials[k];
+            Array.Clear(local);
+            ResidualRestrictRows(b, x, prolongator, local, _partition.Start(k), _partition.End(k));
+        });
+        Vectors.VectorKernels.ForChunks(coarse.Length, (s, e) =>
+        {
+            for (int j = s; j < e; j++)
+            {
+                double sum = 0;
+                for (int k = 0; k < parts; k++)
+                {
+                    sum += partials[k][j];
+                }
+                coarse[j] = sum;
+            }
+        });
+    }
+
+    /// <summary>Number of row blocks the kernels use (one per worker).</summary>
+    public int Workers => _partition.Count;
+
+    private void ResidualRestrictRows(double[] b, double[] x, PackedCsr prolongator, double[] coarse, int start, int end)
+    {
+        var rp = RowPointers; var ci = ColumnIndices; var v = Values;
+        var prp = prolongator.RowPointers; var pci = prolongator.ColumnIndices; var pv = prolongator.Values;
+        for (int i = start; i < end; i++)
+        {
+            double sum = b[i];
+            int e = rp[i + 1];
+            for (int k = rp[i]; k < e; k++)
+            {
+                sum -= v[k] * x[ci[k]];
+            }
+            int pe = prp[i + 1];
+            for (int k = prp[i]; k < pe; k++)
+            {
+                coarse[pci[k]] += pv[k] * sum;
+            }
+        }
+    }
+
     private void Run(Action<int, int> body)
     {
         if (_partition.Count == 1)
