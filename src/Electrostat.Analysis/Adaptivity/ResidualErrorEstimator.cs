@@ -35,7 +35,7 @@ public static class ResidualErrorEstimator
         var mesh = problem.Mesh;
         int nt = mesh.TriangleCount;
         if (etaSquared.Length != nt) throw new ArgumentException("One value per triangle is needed.", nameof(etaSquared));
-        bool axi = problem.Symmetry == Symmetry.Axisymmetric;
+        bool axi = problem.Symmetry == ProblemSymmetry.Axisymmetric;
         int kelvinRegion = problem.OpenBoundary?.ExteriorRegion ?? int.MinValue;
         const double eps0 = 8.8541878128e-12;
         var reg = mesh.TriangleRegion;

@@ -7,7 +7,7 @@ namespace Electrostat.Analysis.Pipeline;
 /// A design turned into a field problem on one mesh, with the maps back to the design: which electrode each terminal
 /// is and which design material each region attribute is.
 /// </summary>
-/// <param name="Problem">The field problem (SI units; see <see cref="Symmetry"/> for per-metre versus totals).</param>
+/// <param name="Problem">The field problem (SI units; see <see cref="ProblemSymmetry"/> for per-metre versus totals).</param>
 /// <param name="TerminalElectrodes">For each conductor of <see cref="ElectrostaticProblem.Conductors"/> (a capacitance
 /// terminal), the index into <c>Design.Electrodes</c> of the electrode it stands for.</param>
 /// <param name="Regions">Meaning of every region attribute present in the mesh (material, dielectric index).</param>

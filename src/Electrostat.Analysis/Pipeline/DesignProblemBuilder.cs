@@ -2,9 +2,9 @@ using Electrostat.Fem.Problem;
 using Electrostat.Geometry.Model;
 using Electrostat.Meshing;
 using Electrostat.Meshing.Designs;
-using FemConductor = Electrostat.Fem.Problem.Conductor;
-using FemMaterial = Electrostat.Fem.Problem.Material;
-using FemSymmetry = Electrostat.Fem.Problem.Symmetry;
+using FemConductor = Electrostat.Fem.Problem.ConductorDefinition;
+using FemMaterial = Electrostat.Fem.Problem.RegionMaterial;
+using FemSymmetry = Electrostat.Fem.Problem.ProblemSymmetry;
 
 namespace Electrostat.Analysis.Pipeline;
 

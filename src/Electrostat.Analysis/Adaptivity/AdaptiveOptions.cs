@@ -1,0 +1,37 @@
+using Electrostat.Fem.Solving;
+
+namespace Electrostat.Analysis.Adaptivity;
+
+/// <summary>Options of the adaptive loop (immutable).</summary>
+public sealed record AdaptiveOptions
+{
+    /// <summary>Stop when every peak |E| per material and every capacitance entry changes by less than this relative
+    /// amount between two levels (dimensionless; default 0.005 = 0.5 %). A capacitance entry's change is measured
+    /// against √(C_ii·C_jj), so that a tiny coupling is judged on the scale of its terminals.</summary>
+    public double RelativeTolerance { get; init; } = 0.005;
+
+    /// <summary>Element budget: the loop stops ("not converged") rather than let the next level exceed it.</summary>
+    public int MaxTriangles { get; init; } = 200_000;
+
+    /// <summary>Dörfler bulk fraction θ (default 0.5).</summary>
+    public double Theta { get; init; } = 0.7;
+
+    /// <summary>Mark at least this fraction of the triangles per level (default 0.1), so the mesh grows geometrically
+    /// and the loop's total cost stays a bounded multiple of the final level.</summary>
+    public double MinimumMarkedFraction { get; init; } = 0.35;
+
+    /// <summary>Least number of levels (default 3: the error estimate extrapolates from the last three).</summary>
+    public int MinLevels { get; init; } = 3;
+
+    /// <summary>Largest number of levels (default 12).</summary>
+    public int MaxLevels { get; init; } = 12;
+
+    /// <summary>Compute the Maxwell capacitance matrix at every level (needed for its convergence test and error estimate).</summary>
+    public bool ComputeCapacitance { get; init; } = true;
+
+    /// <summary>Discs around singular corners, left out of the peak-field convergence test.</summary>
+    public IReadOnlyList<ExclusionDisc> Exclusions { get; init; } = [];
+
+    /// <summary>Linear solver options.</summary>
+    public FieldSolverOptions Solver { get; init; } = new();
+}
