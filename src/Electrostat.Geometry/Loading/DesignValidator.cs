@@ -30,6 +30,25 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         if (ctx.AsObject(token, "enclosure") is not JObject obj) return null;
         ctx.CheckKeys(obj, "the enclosure", EnclosureKeys);
         double potential = ctx.Quantity(obj["potential"], QuantityKind.Potential, "enclosure potential") ?? 0;
+        // Symmetry planes are read first: a shorthand box is cut back to them.
+        var planes = new List<(bool IsX, double Value, JToken Token)>();
+        if (obj["symmetry_planes"] is { } spToken && ctx.AsArray(spToken, "symmetry_planes") is JArray sp)
+        {
+            foreach (var item in sp)
+            {
+                if (ctx.AsObject(item, "a symmetry plane") is not JObject po) continue;
+                ctx.CheckKeys(po, "a symmetry plane", PlaneKeys);
+                if (po.Count != 1)
+                {
+                    Sink.Error(po, "a symmetry plane is given as {\"x\": value} or {\"y\": value}", "write one key per plane, e.g. {\"x\": 0}");
+                    continue;
+                }
+                var prop = po.Properties().First();
+                if (prop.Name is not ("x" or "y")) continue;
+                if (ctx.Quantity(prop.Value, QuantityKind.Length, $"symmetry plane {prop.Name}") is double v)
+                    planes.Add((prop.Name == "x", v, po));
+            }
+        }
         Shape? shape;
         bool shorthand = false;
         if (obj["shape"] is not null && obj["margin"] is not null)
@@ -50,7 +69,17 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
                 Sink.Error(marginToken, "the enclosure margin needs at least one body to surround", "add conductors, or give the enclosure an explicit \"shape\"");
                 return null;
             }
+            var bodies = box;
             box = box.Inflate(margin.Value);
+            // A mirror plane that all bodies lie on one side of becomes an edge of the box (half models with a margin).
+            double eps = 1e-9 * bodies.Diagonal;
+            foreach (var (isX, v, _) in planes)
+            {
+                if (isX && bodies.MinX >= v - eps) box = box with { MinX = v };
+                else if (isX && bodies.MaxX <= v + eps) box = box with { MaxX = v };
+                else if (!isX && bodies.MinY >= v - eps) box = box with { MinY = v };
+                else if (!isX && bodies.MaxY <= v + eps) box = box with { MaxY = v };
+            }
             // Axisymmetric boxes always start on the axis: the domain of revolution includes r = 0.
             if (ctx.Symmetry == Symmetry.Axisymmetric) box = box with { MinX = 0 };
             if (!(margin > 0) && ctx.Symmetry == Symmetry.Planar)
@@ -69,24 +98,6 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         double tol = 1e-9 * size;
 
         // Markers: axis first (axisymmetric), then the requested symmetry planes.
-        var planes = new List<(bool IsX, double Value, JToken Token)>();
-        if (obj["symmetry_planes"] is { } spToken && ctx.AsArray(spToken, "symmetry_planes") is JArray sp)
-        {
-            foreach (var item in sp)
-            {
-                if (ctx.AsObject(item, "a symmetry plane") is not JObject po) continue;
-                ctx.CheckKeys(po, "a symmetry plane", PlaneKeys);
-                if (po.Count != 1)
-                {
-                    Sink.Error(po, "a symmetry plane is given as {\"x\": value} or {\"y\": value}", "write one key per plane, e.g. {\"x\": 0}");
-                    continue;
-                }
-                var prop = po.Properties().First();
-                if (prop.Name is not ("x" or "y")) continue;
-                if (ctx.Quantity(prop.Value, QuantityKind.Length, $"symmetry plane {prop.Name}") is double v)
-                    planes.Add((prop.Name == "x", v, po));
-            }
-        }
         var used = new bool[planes.Count];
         bool axisymmetric = ctx.Symmetry == Symmetry.Axisymmetric;
         var marked = new Shape(shape.Outer.WithMarkers(seg =>

@@ -102,6 +102,18 @@ public class DesignLoaderTests
     }
 
     [Fact]
+    public void ShorthandBox_IsCutBackToAMirrorPlaneAtTheBodiesEdge()
+    {
+        // Bodies span y in [-10, 30] mm; a mirror plane at y = -10 mm becomes the box's lower edge (a half model).
+        string text = DesignTexts.With(("\"shape\": { \"type\": \"rectangle\", \"min\": [-50, -50], \"max\": [50, 50] }, \"potential\": 0", "\"margin\": 10, \"symmetry_planes\": [{ \"y\": -10 }]"));
+        var d = Valid(text);
+        Assert.Equal(new BoundingBox(-40e-3, -10e-3, 40e-3, 40e-3), d.Bounds);
+        var plane = Assert.Single(d.Enclosure.Shape.Outer.Segments, s => s.Marker == BoundaryMarker.SymmetryPlane);
+        Assert.Equal(-10e-3, plane.Start.Y, 1e-15);
+        Assert.False(d.Electrodes[1].TouchesEnclosure); // the plate rests on the mirror plane, not on the wall
+    }
+
+    [Fact]
     public void AxisymmetricShorthandBox_StartsOnAxisAndMarksIt()
     {
         string text = DesignTexts.With(("\"planar\"", "\"axisymmetric\""),
