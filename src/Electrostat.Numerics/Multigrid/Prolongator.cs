@@ -131,9 +131,10 @@ internal static class Prolongator
     /// <summary>
     /// Estimate of ρ(D⁻¹A) by power iteration. D⁻¹A is self-adjoint in the D-inner product, so the Rayleigh
     /// quotient (xᵀAx)/(xᵀDx) is a lower bound that converges to ρ; the result is raised by 5 % to cover
-    /// the shortfall of a few iterations (over-estimating ρ only damps the prolongator smoothing slightly).
+    /// the shortfall of a few iterations (over-estimating ρ only damps the prolongator smoothing slightly). It runs
+    /// on the packed matrix (half the memory traffic; its rounding is far below the 5 % margin).
     /// </summary>
-    public static double SpectralRadiusEstimate(CsrMatrix a, double[] diagonal, double[] x, double[] y, int iterations)
+    public static double SpectralRadiusEstimate(PackedCsr a, double[] diagonal, double[] x, double[] y, int iterations)
     {
         int n = a.Rows;
         // Deterministic pseudo-random start so that setup is reproducible.

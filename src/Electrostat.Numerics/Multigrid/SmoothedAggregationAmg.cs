@@ -97,12 +97,13 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
             {
                 break;
             }
+            var packed = new PackedCsr(a);
             double rho = Prolongator.SpectralRadiusBound(a, diagonal);
             if (options.SpectralRadiusIterations > 0)
             {
                 // Gershgorin is a safe but loose bound on P1 and coarse SA matrices (often 20-60 % high), which
                 // under-smooths the prolongator and costs CG iterations; the power estimate is never allowed above it.
-                rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(a, diagonal, work.RightHandSide, work.Solution, options.SpectralRadiusIterations));
+                rho = Math.Min(rho, Prolongator.SpectralRadiusEstimate(packed, diagonal, work.RightHandSide, work.Solution, options.SpectralRadiusIterations));
             }
             double omega = options.ProlongatorDamping / rho;
             // The prolongator is smoothed with A itself, not with the filtered matrix of Vaněk et al. (§3, weak
@@ -114,7 +115,6 @@ public sealed class SmoothedAggregationAmg : IPreconditioner
             var r = p.Transpose();
             var coarse = GalerkinProduct.Compute(r, a, p);
             var packedP = new PackedCsr(p);
-            var packed = new PackedCsr(a);
             work.Complete(packed, packedP, new HybridGaussSeidel(packed));
             levels.Add(work);
             a = coarse;
