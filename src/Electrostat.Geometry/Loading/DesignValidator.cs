@@ -180,7 +180,8 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
                 return (LineString)NtsShapes.Factory.CreateLineString(pts.Select(p => new Coordinate(p.X, p.Y)).ToArray());
             }).ToArray();
         var wall = NtsShapes.Factory.CreateMultiLineString(wallLines);
-        var wallIndex = new IndexedFacetDistance(wall); // indexed: the naive distance is quadratic in vertex count
+        // Indexed: the naive distance is quadratic in vertex count. No wall at all when every edge is a mirror plane or the axis.
+        var wallIndex = wallLines.Length > 0 ? new IndexedFacetDistance(wall) : null;
 
         // Union-find of touching conductors that may be joined.
         int n = conductors.Count;
@@ -190,7 +191,7 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         for (int i = 0; i < n; i++)
         {
             var a = conductors[i];
-            if (wallLines.Length > 0)
+            if (wallIndex is not null)
             {
                 if (wallIndex.IsWithinDistance(polys[a], _touch))
                 {

@@ -168,6 +168,14 @@ public class DesignLoaderTests
     }
 
     [Fact]
+    public void EnclosureMadeOnlyOfMirrorPlanes_HasNoWall()
+    {
+        string text = DesignTexts.With(("\"max\": [50, 50] }, \"potential\": 0", "\"max\": [50, 50] }, \"potential\": 0, \"symmetry_planes\": [{ \"x\": -50 }, { \"x\": 50 }, { \"y\": -50 }, { \"y\": 50 }]"));
+        var d = Valid(text);
+        Assert.All(d.Enclosure.Shape.Outer.Segments, s => Assert.Equal(BoundaryMarker.SymmetryPlane, s.Marker));
+    }
+
+    [Fact]
     public void ConductorOnSymmetryPlane_IsAllowedAtAnyPotential()
     {
         // The 10 kV circle touches the enclosure's top edge, which is a mirror plane, not a 0 V wall.
