@@ -28,8 +28,7 @@ public static class DofOrdering
     public static int[] ReverseCuthillMcKee(int[] connectivity, int nodesPerElement, int[] dofOfNode, int dofCount)
     {
         var plan = CsrAssemblyPlan.Create(connectivity, nodesPerElement, dofOfNode, dofCount);
-        var pattern = plan.CreateMatrix();
-        var newOfOld = ReverseCuthillMcKee(pattern);
+        var newOfOld = Order(dofCount, plan.PatternRowPointers, plan.PatternColumnIndices);
         var map = new int[dofOfNode.Length];
         for (int i = 0; i < map.Length; i++)
         {
@@ -49,9 +48,11 @@ public static class DofOrdering
         {
             throw new ArgumentException($"Ordering needs a square pattern (got {pattern.Rows} x {pattern.Columns}).", nameof(pattern));
         }
-        int n = pattern.Rows;
-        var rp = pattern.RowPointers;
-        var ci = pattern.ColumnIndices;
+        return Order(pattern.Rows, pattern.RowPointers, pattern.ColumnIndices);
+    }
+
+    private static int[] Order(int n, int[] rp, int[] ci)
+    {
         var degree = new int[n];
         for (int i = 0; i < n; i++)
         {

@@ -61,6 +61,12 @@ public sealed class CsrAssemblyPlan
     /// <summary>Number of elements.</summary>
     public int ElementCount { get; }
 
+    /// <summary>Row pointers of the pattern (shared with every matrix the plan creates; do not modify).</summary>
+    internal int[] PatternRowPointers => _rowPointers;
+
+    /// <summary>Column indices of the pattern (shared with every matrix the plan creates; do not modify).</summary>
+    internal int[] PatternColumnIndices => _columnIndices;
+
     /// <summary>Number of stored entries of the pattern.</summary>
     public int NonZeroCount => _rowPointers[Rows];
 
