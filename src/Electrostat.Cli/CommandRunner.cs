@@ -6,7 +6,7 @@ namespace Electrostat.Cli;
 internal static class CommandRunner
 {
     /// <summary>Every command, in the order shown by <c>electrostat help</c>.</summary>
-    public static IReadOnlyList<ICommand> Commands { get; } = [new CheckCommand()];
+    public static IReadOnlyList<ICommand> Commands { get; } = [new CheckCommand(), new SolveCommand()];
 
     /// <summary>Runs the command line; never throws, never prints a stack trace.</summary>
     public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr)

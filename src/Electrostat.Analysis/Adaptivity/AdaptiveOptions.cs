@@ -1,3 +1,4 @@
+using Electrostat.Analysis.Pipeline;
 using Electrostat.Fem.Solving;
 
 namespace Electrostat.Analysis.Adaptivity;
@@ -31,6 +32,10 @@ public sealed record AdaptiveOptions
 
     /// <summary>Discs around singular corners, left out of the peak-field convergence test.</summary>
     public IReadOnlyList<ExclusionDisc> Exclusions { get; init; } = [];
+
+    /// <summary>Optional: called once after the first solve to add exclusion discs found from the solved design (the
+    /// singular-corner detector needs a solution); its discs join <see cref="Exclusions"/> for every level.</summary>
+    public Func<BuiltProblem, FieldSolution, IReadOnlyList<ExclusionDisc>>? ExclusionsAfterFirstSolve { get; init; }
 
     /// <summary>Linear solver options.</summary>
     public FieldSolverOptions Solver { get; init; } = new();

@@ -16,6 +16,7 @@ namespace Electrostat.Analysis.Adaptivity;
 /// <param name="Capacitance">The final capacitance matrix, or null when not computed (no terminals).</param>
 /// <param name="PeakErrors">Estimated error of each material's peak |E| (V/m), by material name.</param>
 /// <param name="CapacitanceErrors">Estimated error of each Maxwell entry [i, j] (F/m planar, F axisymmetric), or null.</param>
+/// <param name="Exclusions">The discs left out of the peak convergence test (singular corners).</param>
 /// <param name="TotalSeconds">Wall time of the whole loop, seconds.</param>
 public sealed record AdaptiveResult(
     IReadOnlyList<AdaptiveLevel> Levels,
@@ -27,6 +28,7 @@ public sealed record AdaptiveResult(
     CapacitanceMatrixResult? Capacitance,
     IReadOnlyDictionary<string, ErrorEstimate> PeakErrors,
     ErrorEstimate[,]? CapacitanceErrors,
+    IReadOnlyList<ExclusionDisc> Exclusions,
     double TotalSeconds)
 {
     /// <summary>Time of the final level's solve (design and capacitance solves), seconds.</summary>

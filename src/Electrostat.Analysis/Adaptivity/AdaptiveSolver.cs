@@ -46,6 +46,7 @@ public static class AdaptiveSolver
         double meshSeconds = initialMeshSeconds + sw.Elapsed.TotalSeconds;
         double[]? warm = null;
         string reason;
+        var exclusions = options.Exclusions.ToList();
         bool converged = false;
         BuiltProblem built;
         FieldSolution solution;
@@ -62,12 +63,13 @@ public static class AdaptiveSolver
             if (cap is not null && cap.ColumnReports.Any(r => !r.Converged))
                 throw new SolveFailedException($"A capacitance solve did not converge on level {levels.Count}.");
             double solveSeconds = sw.Elapsed.TotalSeconds;
+            if (levels.Count == 0 && options.ExclusionsAfterFirstSolve is { } more) exclusions.AddRange(more(built, solution));
 
             sw.Restart();
             var edges = MeshEdges.Build(current.Mesh);
             var eta2 = new double[current.Mesh.TriangleCount];
             double eta = ResidualErrorEstimator.Estimate(solution, edges, eta2);
-            var peaks = PeakFieldMeter.Measure(built, solution, edges, options.Exclusions);
+            var peaks = PeakFieldMeter.Measure(built, solution, edges, exclusions);
             var level = new AdaptiveLevel(levels.Count, current.Mesh.TriangleCount, current.Mesh.VertexCount, peaks,
                 cap?.Maxwell, eta, solution.Report.Iterations, meshSeconds, solveSeconds, 0);
             levels.Add(level);
@@ -126,7 +128,7 @@ public static class AdaptiveSolver
                 }
             }
         }
-        return new AdaptiveResult(levels, converged, reason, current, built, solution, cap, peakErrors, capErrors, total.Elapsed.TotalSeconds + initialMeshSeconds);
+        return new AdaptiveResult(levels, converged, reason, current, built, solution, cap, peakErrors, capErrors, exclusions, total.Elapsed.TotalSeconds + initialMeshSeconds);
     }
 
     /// <summary>True when every peak and capacitance entry of <paramref name="b"/> is within the tolerance of <paramref name="a"/>.</summary>
