@@ -348,23 +348,13 @@ public sealed class CsrAssemblyPlan
 
     private static int FindSlot(int[] columns, int start, int end, int column)
     {
-        if (end - start <= 16)
+        // Short rows (P1: about 7 entries): a vectorised scan; long rows (merged floating-conductor dofs): binary search.
+        int s = end - start <= 32
+            ? columns.AsSpan(start, end - start).IndexOf(column)
+            : Array.BinarySearch(columns, start, end - start, column) - start;
+        if (s >= 0)
         {
-            for (int s = start; s < end; s++)
-            {
-                if (columns[s] == column)
-                {
-                    return s;
-                }
-            }
-        }
-        else
-        {
-            int s = Array.BinarySearch(columns, start, end - start, column);
-            if (s >= 0)
-            {
-                return s;
-            }
+            return start + s;
         }
         Debug.Fail("Column missing from the pattern the plan built itself.");
         return -1;
