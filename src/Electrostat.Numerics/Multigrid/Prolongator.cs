@@ -102,7 +102,7 @@ internal static class Prolongator
                     }
                 }
                 Debug.Assert(next == prp[i + 1]);
-                SparseProduct.SortRow(pci.AsSpan(start, next - start), pv.AsSpan(start, next - start));
+                RowSort.SortRow(pci.AsSpan(start, next - start), pv.AsSpan(start, next - start));
             }
         });
         return new CsrMatrix(n, aggregates, prp, pci, pv, validate: false);
