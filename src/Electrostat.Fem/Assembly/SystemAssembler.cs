@@ -43,7 +43,29 @@ internal static class SystemAssembler
             connectivity[3 * k + 2] = tri[3 * t + 2];
         }
         var plan = CsrAssemblyPlan.Create(connectivity, 3, map.DofOfNode, map.DofCount);
-        return plan.Assemble((k, ke) => cp.ElementStiffness(order[k], ke));
+        // The element kernel inlined over plain arrays: this runs once per triangle and dominates numeric assembly.
+        var x = cp.Mesh.X;
+        var y = cp.Mesh.Y;
+        var material = cp.TriangleMaterial;
+        var eps = cp.MaterialEpsilon;
+        var kelvin = cp.KelvinWeights;
+        bool axisymmetric = cp.Symmetry == Problem.ProblemSymmetry.Axisymmetric;
+        return plan.Assemble((k, ke) =>
+        {
+            int a = connectivity[3 * k], b = connectivity[3 * k + 1], c = connectivity[3 * k + 2];
+            double xa = x[a], ya = y[a], xb = x[b], yb = y[b], xc = x[c], yc = y[c];
+            double w;
+            if (kelvin is not null && !double.IsNaN(kelvin[order[k]]))
+            {
+                w = kelvin[order[k]];
+            }
+            else
+            {
+                double area = 0.5 * ((xb - xa) * (yc - ya) - (xc - xa) * (yb - ya));
+                w = axisymmetric ? 2 * Math.PI * area * (xa + xb + xc) / 3.0 : area;
+            }
+            P1Triangle.Stiffness(xa, ya, xb, yb, xc, yc, eps[material[order[k]]], w, ke);
+        });
     }
 
     /// <summary>
