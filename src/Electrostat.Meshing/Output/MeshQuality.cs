@@ -19,26 +19,57 @@ public sealed record MeshQuality(int TriangleCount, int VertexCount, double MinA
     internal static MeshQuality Of(TriangleMesh mesh, double boundDegrees, List<(int Triangle, double MinAngle)>? below)
     {
         ArgumentNullException.ThrowIfNull(mesh);
+        // Angles are binned by their cosines against the cosines of the bin edges (cos falls as the angle grows), so
+        // no trigonometric call is needed per triangle; only triangles below the bound get their angle computed.
+        Span<double> edgeCos = stackalloc double[17];
+        for (int k = 0; k < 17; k++) edgeCos[k] = Math.Cos((k + 1) * 10 * Math.PI / 180);
+        double boundCos = Math.Cos(boundDegrees * Math.PI / 180);
         var hist = new int[18];
-        double minA = 180, maxA = 0;
+        double maxCos = -1, minCos = 1;
         int belowCount = 0;
+        var x = mesh.X;
+        var y = mesh.Y;
+        var tri = mesh.Triangles;
         Span<double> ang = stackalloc double[3];
         for (int t = 0; t < mesh.TriangleCount; t++)
         {
-            TriangleAngles(mesh, t, ang);
-            double lo = Math.Min(ang[0], Math.Min(ang[1], ang[2]));
-            double hi = Math.Max(ang[0], Math.Max(ang[1], ang[2]));
-            minA = Math.Min(minA, lo);
-            maxA = Math.Max(maxA, hi);
-            if (lo < boundDegrees)
+            int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
+            double abx = x[b] - x[a], aby = y[b] - y[a];
+            double acx = x[c] - x[a], acy = y[c] - y[a];
+            double bcx = x[c] - x[b], bcy = y[c] - y[b];
+            double lab = Math.Sqrt(abx * abx + aby * aby), lac = Math.Sqrt(acx * acx + acy * acy), lbc = Math.Sqrt(bcx * bcx + bcy * bcy);
+            double cosA = (abx * acx + aby * acy) / (lab * lac);
+            double cosB = -(abx * bcx + aby * bcy) / (lab * lbc);
+            double cosC = (acx * bcx + acy * bcy) / (lac * lbc);
+            double hi = Math.Max(cosA, Math.Max(cosB, cosC));
+            double lo = Math.Min(cosA, Math.Min(cosB, cosC));
+            if (hi > maxCos) maxCos = hi;
+            if (lo < minCos) minCos = lo;
+            hist[Bin(cosA, edgeCos)]++;
+            hist[Bin(cosB, edgeCos)]++;
+            hist[Bin(cosC, edgeCos)]++;
+            if (hi > boundCos)
             {
-                belowCount++;
-                below?.Add((t, lo));
+                TriangleAngles(mesh, t, ang);
+                double minAngle = Math.Min(ang[0], Math.Min(ang[1], ang[2]));
+                if (minAngle < boundDegrees)
+                {
+                    belowCount++;
+                    below?.Add((t, minAngle));
+                }
             }
-            for (int k = 0; k < 3; k++) hist[Math.Clamp((int)(ang[k] / 10), 0, 17)]++;
         }
+        double minA = Math.Acos(Math.Clamp(maxCos, -1, 1)) * (180 / Math.PI);
+        double maxA = Math.Acos(Math.Clamp(minCos, -1, 1)) * (180 / Math.PI);
         if (mesh.TriangleCount == 0) minA = maxA = 0;
         return new MeshQuality(mesh.TriangleCount, mesh.VertexCount, minA, maxA, hist, belowCount);
+    }
+
+    private static int Bin(double cos, ReadOnlySpan<double> edgeCos)
+    {
+        int k = 0;
+        while (k < 17 && cos <= edgeCos[k]) k++;
+        return k;
     }
 
     /// <summary>The three angles of triangle t, degrees (angle k at vertex k).</summary>
