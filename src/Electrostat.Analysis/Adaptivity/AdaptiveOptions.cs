@@ -15,11 +15,11 @@ public sealed record AdaptiveOptions
     public int MaxTriangles { get; init; } = 200_000;
 
     /// <summary>Dörfler bulk fraction θ (default 0.5).</summary>
-    public double Theta { get; init; } = 0.7;
+    public double Theta { get; init; } = 0.8;
 
     /// <summary>Mark at least this fraction of the triangles per level (default 0.1), so the mesh grows geometrically
     /// and the loop's total cost stays a bounded multiple of the final level.</summary>
-    public double MinimumMarkedFraction { get; init; } = 0.35;
+    public double MinimumMarkedFraction { get; init; } = 0.6;
 
     /// <summary>Least number of levels (default 3: the error estimate extrapolates from the last three).</summary>
     public int MinLevels { get; init; } = 3;
