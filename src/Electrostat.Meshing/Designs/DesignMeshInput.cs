@@ -48,8 +48,7 @@ public sealed class DesignMeshInput
     public ValidationReport Validate(MeshResult result)
     {
         ArgumentNullException.ThrowIfNull(result);
-        double smallest = ExpectedRegionAreas.Values.Where(a => a > 0).DefaultIfEmpty(1).Min();
-        return result.Validate(ExpectedRegionAreas, AreaToleranceSquareMetres / smallest);
+        return result.Validate(ExpectedRegionAreas, 1e-9, AreaToleranceSquareMetres);
     }
 
     /// <summary>The design entity a mesh vertex lies on, or null for a vertex inside a region.</summary>

@@ -55,7 +55,8 @@ public sealed class MeshResult
     /// </summary>
     /// <param name="expectedRegionAreas">Expected area per region attribute, m²; null to skip the area check.</param>
     /// <param name="areaRelativeTolerance">Relative tolerance for the area check.</param>
+    /// <param name="areaAbsoluteToleranceSquareMetres">Absolute tolerance for the area check, m² (the larger of the two applies).</param>
     /// <returns>The report; <see cref="ValidationReport.IsValid"/> is true when all invariants hold.</returns>
-    public ValidationReport Validate(IReadOnlyDictionary<int, double>? expectedRegionAreas = null, double areaRelativeTolerance = 1e-9) =>
-        MeshValidator.Validate(this, expectedRegionAreas, areaRelativeTolerance, _topologyCheck());
+    public ValidationReport Validate(IReadOnlyDictionary<int, double>? expectedRegionAreas = null, double areaRelativeTolerance = 1e-9, double areaAbsoluteToleranceSquareMetres = 0) =>
+        MeshValidator.Validate(this, expectedRegionAreas, areaRelativeTolerance, areaAbsoluteToleranceSquareMetres, _topologyCheck());
 }

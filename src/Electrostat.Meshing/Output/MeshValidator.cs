@@ -14,7 +14,7 @@ internal static class MeshValidator
 {
     private const int MaxPerKind = 5;
 
-    internal static ValidationReport Validate(MeshResult result, IReadOnlyDictionary<int, double>? expectedRegionAreas, double areaRelTolerance, string? topologyError)
+    internal static ValidationReport Validate(MeshResult result, IReadOnlyDictionary<int, double>? expectedRegionAreas, double areaRelTolerance, double areaAbsTolerance, string? topologyError)
     {
         var mesh = result.Mesh;
         var graph = result.Graph;
@@ -89,7 +89,7 @@ internal static class MeshValidator
             foreach (var (region, expected) in expectedRegionAreas)
             {
                 area.TryGetValue(region, out double got);
-                if (Math.Abs(got - expected) > areaRelTolerance * Math.Max(Math.Abs(expected), 1e-300))
+                if (Math.Abs(got - expected) > Math.Max(areaRelTolerance * Math.Abs(expected), areaAbsTolerance))
                     Fail("area", $"region {region} has area {got:G12} m² in the mesh but {expected:G12} m² expected");
             }
         }
