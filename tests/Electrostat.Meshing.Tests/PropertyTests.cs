@@ -133,6 +133,25 @@ public class PropertyTests
     }
 
     [Fact]
+    public void RandomTinyFeatures_ValidAndFullBound()
+    {
+        // A unit square with a square hole of side 1e-6 to 1e-2 m at a random place and a slit of random width cut
+        // into the bottom edge: feature sizes span up to six decades next to the 1 m outline.
+        var gen = Gen.Select(Gen.Double[-6, -2], Gen.Double[0.1, 0.8], Gen.Double[0.1, 0.8], Gen.Double[-6, -2], Gen.Double[0.2, 0.8]);
+        gen.Sample((holeExp, hx, hy, slitExp, sx) =>
+        {
+            double hs = Math.Pow(10, holeExp), w = Math.Pow(10, slitExp);
+            var g = new PlanarGraph();
+            g.AddPolygon(new List<(double, double)> { (0, 0), (sx, 0), (sx, 0.05), (sx + w, 0.05), (sx + w, 0), (1, 0), (1, 1), (0, 1) }, 1);
+            g.AddPolygon(TestGraphs.Rect(hx, hy + 0.1, hx + hs, hy + 0.1 + hs), 2);
+            g.AddHole(hx + hs / 2, hy + 0.1 + hs / 2);
+            var r = Mesher.Generate(g, new MeshOptions { MaxEdgeLengthMetres = 0.2, MaxTriangles = 500_000 });
+            AssertGood(r, new Dictionary<int, double> { [0] = 1 - hs * hs - 0.05 * w }, 1e-8);
+            return r.Quality.MinAngleDegrees >= 28;
+        }, iter: 15);
+    }
+
+    [Fact]
     public void SmallInputAngle_TerminatesAndReports()
     {
         // Two segments meeting at 2°: the bound cannot be met at the apex, but refinement must stop and say so.
