@@ -1,5 +1,7 @@
 using System.Globalization;
+using System.Text.Json;
 using Electrostat.Analysis.Pipeline;
+using Electrostat.Analysis.Results;
 using Electrostat.Rendering.Report;
 using Electrostat.Rendering.Tests.Support;
 using OpenQA.Selenium;
@@ -30,6 +32,10 @@ public class BrowserReportTests(ITestOutputHelper output)
         string folder = Path.Combine(AppContext.BaseDirectory, "artifacts", "browser-report");
         if (Directory.Exists(folder)) Directory.Delete(folder, recursive: true);
         var files = ReportWriter.Write(folder, input);
+        // results.json from the solve pipeline's own writer: the page must show the same numbers.
+        string resultsPath = Path.Combine(folder, "results.json");
+        File.WriteAllText(resultsPath, ResultsJsonWriter.Write(outcome, "coax.json"));
+        using var results = JsonDocument.Parse(File.ReadAllText(resultsPath));
         Assert.True(files.Insets.Count > 0);
         Assert.NotEmpty(files.SurfacePlots);
 
@@ -55,26 +61,30 @@ public class BrowserReportTests(ITestOutputHelper output)
             Assert.DoesNotContain("http://", File.ReadAllText(files.ReportHtml).Replace("http://www.w3.org/", "", StringComparison.Ordinal), StringComparison.Ordinal);
             Assert.DoesNotContain("https://", File.ReadAllText(files.ReportHtml), StringComparison.Ordinal);
 
-            // Tables carry the solved values: the Maxwell matrix and the margins.
-            var cap = input.Capacitance!;
+            // Tables carry the values of results.json: the Maxwell matrix and the margins.
+            var maxwell = results.RootElement.GetProperty("capacitance").GetProperty("maxwell");
+            int n = maxwell.GetArrayLength();
             var capCells = driver.FindElements(By.CssSelector("#capacitance-table td[data-si]"));
-            Assert.Equal(cap.Count * cap.Count, capCells.Count);
-            for (int i = 0; i < cap.Count; i++)
-                for (int j = 0; j < cap.Count; j++)
-                    Assert.Equal(cap.Maxwell[i, j], double.Parse(capCells.ElementAt(i * cap.Count + j).GetAttribute("data-si")!, CultureInfo.InvariantCulture));
+            Assert.Equal(n * n, capCells.Count);
+            for (int i = 0; i < n; i++)
+                for (int j = 0; j < n; j++)
+                    AssertSame(maxwell[i][j].GetDouble(), capCells.ElementAt(i * n + j).GetAttribute("data-si")!);
             // Coax capacitance per metre 2πε/ln(b/a) (Griffiths, Introduction to Electrodynamics, §2.5, problem 2.43 form)
             // with εr = 2: the shown value agrees within 1 %.
             double exactPf = 2 * Math.PI * 2 * 8.8541878128e-12 / Math.Log(Designs.CoaxB / Designs.CoaxA) * 1e12;
             double shownPf = double.Parse(capCells.First().Text, CultureInfo.InvariantCulture);
             Assert.InRange(shownPf, exactPf * 0.99, exactPf * 1.01);
+            var margins = results.RootElement.GetProperty("margins").EnumerateArray().ToList();
             var marginRows = driver.FindElements(By.CssSelector("#margin-table tbody tr"));
-            Assert.Equal(input.Analysis.Margins.Materials.Count, marginRows.Count);
-            foreach (var (m, row) in input.Analysis.Margins.Materials.Zip(marginRows))
+            Assert.Equal(margins.Count, marginRows.Count);
+            foreach (var (m, row) in margins.Zip(marginRows))
             {
                 var cells = row.FindElements(By.TagName("td"));
-                Assert.Equal(m.MaterialName, cells[0].Text);
-                Assert.Equal(m.PeakFieldVoltsPerMetre, double.Parse(cells[2].GetAttribute("data-si")!, CultureInfo.InvariantCulture));
-                Assert.Equal(m.Margin!.Value, double.Parse(cells[4].GetAttribute("data-si")!, CultureInfo.InvariantCulture));
+                Assert.Equal(m.GetProperty("material").GetString(), cells[0].Text);
+                AssertSame(m.GetProperty("peak_field_V_per_m").GetDouble(), cells[2].GetAttribute("data-si")!);
+                AssertSame(m.GetProperty("margin").GetDouble(), cells[4].GetAttribute("data-si")!);
+                // The printed text is the same number rounded for reading (kV/mm, 4 significant digits).
+                Assert.Equal(m.GetProperty("peak_field_V_per_m").GetDouble() * 1e-6, double.Parse(cells[2].Text, CultureInfo.InvariantCulture), 4e-4 * m.GetProperty("peak_field_V_per_m").GetDouble() * 1e-6);
             }
             Assert.Contains("qualified person", driver.FindElement(By.Id("caution-banner")).Text, StringComparison.Ordinal);
 
@@ -111,5 +121,11 @@ public class BrowserReportTests(ITestOutputHelper output)
         {
             try { Directory.Delete(profile, recursive: true); } catch (IOException) { } catch (UnauthorizedAccessException) { }
         }
+    }
+
+    private static void AssertSame(double expected, string shown)
+    {
+        double v = double.Parse(shown, CultureInfo.InvariantCulture);
+        Assert.True(Math.Abs(v - expected) <= 1e-12 * Math.Abs(expected), $"page shows {shown}, results.json has {expected:R}");
     }
 }
