@@ -1,3 +1,4 @@
+using Electrostat.Geometry.Materials;
 using Electrostat.Geometry.Model;
 using Electrostat.Geometry.Quantities;
 using Electrostat.Geometry.Shapes;
@@ -11,7 +12,7 @@ internal sealed class DesignReader
 {
     private static readonly string[] TopKeys =
         ["$schema", "title", "description", "units", "symmetry", "depth", "parameters", "materials", "background", "enclosure", "conductors", "dielectrics", "checks"];
-    private static readonly string[] MaterialKeys = ["relative_permittivity", "breakdown_field", "description"];
+    private static readonly string[] MaterialKeys = ["preset", "relative_permittivity", "breakdown_field", "description"];
     private static readonly string[] ConductorKeys = ["name", "potential", "floating", "charge", "shape"];
     private static readonly string[] DielectricKeys = ["name", "material", "shape"];
     private static readonly string[] ChecksKeys = ["min_margin", "min_clearance", "materials", "pairs"];
@@ -104,6 +105,7 @@ internal sealed class DesignReader
         }
 
         var materials = ReadMaterials(root["materials"]);
+        AddReferencedPresets(root, materials);
         Material background = Material.Vacuum;
         if (root["background"] is { } bgToken)
         {
@@ -214,16 +216,54 @@ internal sealed class DesignReader
             string what = $"material \"{prop.Name}\"";
             if (_ctx.AsObject(prop.Value, what) is not JObject m) continue;
             _ctx.CheckKeys(m, what, MaterialKeys);
-            var epsToken = _ctx.Required(m, "relative_permittivity", what, "add \"relative_permittivity\": a number ≥ 1, e.g. 4.4");
-            var eps = _ctx.Quantity(epsToken, QuantityKind.Dimensionless, "relative_permittivity", positive: true);
-            double? breakdown = _ctx.Quantity(m["breakdown_field"], QuantityKind.Field, "breakdown_field", positive: true);
+            var preset = ReadPreset(m["preset"]);
+            if (m["preset"] is not null && preset is null) continue;
+            var epsToken = preset is not null ? m["relative_permittivity"]
+                : _ctx.Required(m, "relative_permittivity", what, "add \"relative_permittivity\": a number ≥ 1, e.g. 4.4, or \"preset\": a built-in material (electrostat materials)");
+            var eps = _ctx.Quantity(epsToken, QuantityKind.Dimensionless, "relative_permittivity", positive: true) ?? preset?.RelativePermittivity;
+            double? breakdown = _ctx.Quantity(m["breakdown_field"], QuantityKind.Field, "breakdown_field", positive: true) ?? preset?.BreakdownFieldVoltsPerMetre;
             if (m["description"] is { } d) _ctx.String(d, "description");
             if (eps is null) continue;
+            if (preset is not null && m["breakdown_field"] is null)
+                _sink.Note(m["preset"], $"{what} takes the typical breakdown field of preset \"{preset.Name}\" ({UnitTable.Format(preset.BreakdownFieldVoltsPerMetre, QuantityKind.Field)})",
+                    "enter the rated \"breakdown_field\" of your own material: " + MaterialPresets.Caution);
             if (eps < 1)
                 _sink.Warning(epsToken, $"{what} has relative permittivity {eps:G6} < 1, unusual for a passive dielectric", "check the value");
             result[prop.Name] = new Material(prop.Name, eps.Value, breakdown);
         }
         return result;
+    }
+
+    private MaterialPreset? ReadPreset(JToken? token)
+    {
+        if (token is null) return null;
+        string? name = _ctx.String(token, "preset");
+        if (name is null) return null;
+        var preset = MaterialPresets.Find(name);
+        if (preset is null)
+            _sink.Error(token, $"unknown material preset \"{name}\"", Suggestions.Hint(name, MaterialPresets.All.Select(p => p.Name).ToList()) + " (electrostat materials lists them)");
+        return preset;
+    }
+
+    // A material name used but not declared resolves to the built-in preset of that name (except "vacuum", which keeps
+    // the built-in vacuum without a breakdown field, as before presets existed; declare {"preset": "vacuum"} for that).
+    private void AddReferencedPresets(JObject root, Dictionary<string, Material> materials)
+    {
+        var uses = new List<JToken>();
+        if (root["background"] is { Type: JTokenType.String } bg) uses.Add(bg);
+        if (root["dielectrics"] is JArray ds)
+            foreach (var d in ds.OfType<JObject>())
+                if (d["material"] is { Type: JTokenType.String } mt) uses.Add(mt);
+        if (root["checks"] is JObject { } ch && ch["materials"] is JObject cm)
+            foreach (var prop in cm.Properties()) uses.Add(prop);
+        foreach (var use in uses)
+        {
+            string name = use is JProperty jp ? jp.Name : (string)use!;
+            if (materials.ContainsKey(name) || name == Material.Vacuum.Name || MaterialPresets.Find(name) is not { } preset) continue;
+            materials[name] = MaterialPresets.ToMaterial(preset, name);
+            _sink.Note(use, $"material \"{name}\" is the built-in preset: relative permittivity {preset.RelativePermittivity.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)}, typical breakdown field {UnitTable.Format(preset.BreakdownFieldVoltsPerMetre, QuantityKind.Field)} ({preset.Source})",
+                $"to use your rated value, declare \"materials\": {{\"{name}\": {{\"preset\": \"{name}\", \"breakdown_field\": \"...\"}}}}. " + MaterialPresets.Caution);
+        }
     }
 
     private static string MaterialHint(string name, Dictionary<string, Material> materials)
