@@ -87,6 +87,17 @@ public static class SingularCornerDetector
         return list;
     }
 
+    /// <summary>
+    /// The sharp corners of a design whose field-side angle exceeds 180°, from the geometry alone (no field): location
+    /// in metres and field-side angle in degrees. Useful before solving (e.g. to grade the mesh towards them).
+    /// </summary>
+    /// <param name="design">The design.</param>
+    public static IReadOnlyList<(double X, double Y, double AngleDegrees, string ConductorName)> FindCornerPoints(Design design)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        return FindCorners(design).Select(c => (c.Location.X, c.Location.Y, c.FieldSideAngleRadians * 180 / Math.PI, c.ConductorName)).ToArray();
+    }
+
     /// <summary>The sharp re-entrant corners of a design's exact geometry.</summary>
     internal static List<CornerGeometry> FindCorners(Design design)
     {
