@@ -15,9 +15,10 @@ namespace Electrostat.Analysis.Adaptivity;
 /// nodal reactions (the "consistent flux" of Carey, Chow and Seager, "Approximate boundary-flux calculations",
 /// Comput. Methods Appl. Mech. Eng. 50:107–120, 1985), which converges like the energy, O(h²) on smooth surfaces:
 /// at a conductor vertex i, σ_i = R_i / ∫N_i dS with R_i = Σ_T (K_T φ − f_T)_i over the triangles around i and the
-/// integral over the conductor edges at i (weighted by 2πr for axisymmetric problems), and E_i = σ_i / ε, ε the
-/// length-weighted permittivity of the adjacent material(s) (one common normal field on both sides of a triple
-/// point, conservative for the lower-permittivity side's margin is not claimed).</para>
+/// integral over the conductor edges at i (weighted by 2πr for axisymmetric problems), and E = σ/ε with ε the
+/// measure-weighted permittivity of the adjacent material(s): one common normal field is assumed on both sides of a
+/// triple point. Single-vertex values are smoothed over the vertex and its two neighbours along the conductor (see
+/// the code for the measured reason).</para>
 /// <para>Per material, the surface value counts for each material that touches the vertex through a conductor edge.</para>
 /// </remarks>
 public static class PeakFieldMeter
