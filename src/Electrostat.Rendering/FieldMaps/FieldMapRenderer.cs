@@ -166,42 +166,10 @@ public static class FieldMapRenderer
             sketch.Text(new SKPoint((float)frame.PixelX(0) + 4, (float)frame.PixelY(wMaxY) + 14), "axis (r = 0)", 11, Ink, halo: true);
         }
 
-        // 9. Labels: equipotential values, dielectric materials, conductor names and potentials.
+        // 9. Hot-spot markers first (they must sit exactly at their points), then labels placed round them:
+        // conductor names and potentials, material names, equipotential values, each at the first free spot.
         var mapRect = new SKRect((float)frame.PixelX(viewMinX), (float)frame.PixelY(wMaxY), (float)frame.PixelX(wMaxX), (float)frame.PixelY(wMinY));
-        foreach (double level in options.LabelEquipotentials ? levels : [])
-        {
-            IsolineSegment? best = null;
-            double bestLen = 0;
-            foreach (var seg in lines)
-            {
-                if (seg.LevelVolts != level) continue;
-                double len = Math.Abs(seg.X1 - seg.X0) + Math.Abs(seg.Y1 - seg.Y0);
-                if (len > bestLen) { bestLen = len; best = seg; }
-            }
-            if (best is IsolineSegment b)
-            {
-                var at = P(0.5 * (b.X0 + b.X1), 0.5 * (b.Y0 + b.Y1), 1);
-                if (mapRect.Contains(at)) sketch.Text(new SKPoint(at.X, at.Y + 4), Labels.Volts(level), 10, Ink, TextAnchor.Middle, halo: true);
-            }
-        }
-        foreach (var d in context.Design.Dielectrics)
-        {
-            var bb = d.Shape.Bounds;
-            var at = P(0.5 * (bb.MinX + bb.MaxX), 0.5 * (bb.MinY + bb.MaxY), 1);
-            if (mapRect.Contains(at)) sketch.Text(at, d.MaterialName, 11, OutlineColour.WithAlpha(255), TextAnchor.Middle, halo: true);
-        }
-        for (int ci = 0; ci < context.Design.Conductors.Count; ci++)
-        {
-            var cond = context.Design.Conductors[ci];
-            var bb = cond.Shape.Bounds;
-            double cx = Math.Clamp(0.5 * (bb.MinX + bb.MaxX), wMinX, wMaxX), cy = Math.Clamp(0.5 * (bb.MinY + bb.MaxY), wMinY, wMaxY);
-            double v = context.ConductorPotentialVolts(ci);
-            string text = double.IsNaN(v) ? cond.Name : $"{cond.Name} {Labels.Volts(v)}";
-            var at = P(cx, cy, 1);
-            if (mapRect.Contains(at)) sketch.Text(new SKPoint(at.X, at.Y + 4), text, 11, Ink, TextAnchor.Middle, halo: true);
-        }
-
-        // 10. Hot-spot markers.
+        var placer = new LabelPlacer(mapRect);
         var markers = new List<MarkerPlacement>();
         if (options.HotSpotMarkers)
         {
@@ -209,10 +177,62 @@ public static class FieldMapRenderer
             {
                 if (h.XMetres < wMinX || h.XMetres > wMaxX || h.YMetres < wMinY || h.YMetres > wMaxY) continue;
                 var at = P(h.XMetres, h.YMetres, 1);
-                sketch.Circle(at, 9, SKColors.White, MarkerEdge, 2);
-                sketch.Text(new SKPoint(at.X, at.Y + 4), h.Rank.ToString(System.Globalization.CultureInfo.InvariantCulture), 11, MarkerEdge, TextAnchor.Middle);
                 markers.Add(new MarkerPlacement(h.Rank, at.X, at.Y));
+                placer.Reserve(new SKRect(at.X - 10, at.Y - 10, at.X + 10, at.Y + 10));
             }
+        }
+        var labels = new List<(SKPoint At, string Text, float Size, SKColor Colour)>();
+        void Place(IEnumerable<SKPoint> candidates, string text, float size, SKColor colour)
+        {
+            foreach (var c in candidates)
+            {
+                var baseline = new SKPoint(c.X, c.Y + 0.35f * size);
+                if (placer.TryPlace(LabelPlacer.BoxOf(baseline, text, size)))
+                {
+                    labels.Add((baseline, text, size, colour));
+                    return;
+                }
+            }
+        }
+        static IEnumerable<SKPoint> Around(SKPoint p)
+        {
+            yield return p;
+            for (int k = 1; k <= 4; k++)
+            {
+                yield return new SKPoint(p.X, p.Y + 15 * k);
+                yield return new SKPoint(p.X, p.Y - 15 * k);
+            }
+        }
+        for (int ci = 0; ci < context.Design.Conductors.Count; ci++)
+        {
+            var cond = context.Design.Conductors[ci];
+            var bb = cond.Shape.Bounds;
+            double cx = Math.Clamp(0.5 * (bb.MinX + bb.MaxX), wMinX, wMaxX), cy = Math.Clamp(0.5 * (bb.MinY + bb.MaxY), wMinY, wMaxY);
+            double v = context.ConductorPotentialVolts(ci);
+            Place(Around(P(cx, cy, 1)), double.IsNaN(v) ? cond.Name : $"{cond.Name} {Labels.Volts(v)}", 11, Ink);
+        }
+        foreach (var d in context.Design.Dielectrics)
+        {
+            var bb = d.Shape.Bounds;
+            Place(Around(P(0.5 * (bb.MinX + bb.MaxX), 0.5 * (bb.MinY + bb.MaxY), 1)), d.MaterialName, 11, OutlineColour);
+        }
+        foreach (double level in options.LabelEquipotentials ? levels : [])
+        {
+            // Candidates: the midpoints of this level's longest pieces.
+            var candidates = lines.Where(seg => seg.LevelVolts == level)
+                .OrderByDescending(seg => Math.Abs(seg.X1 - seg.X0) + Math.Abs(seg.Y1 - seg.Y0))
+                .Take(12)
+                .Select(seg => P(0.5 * (seg.X0 + seg.X1), 0.5 * (seg.Y0 + seg.Y1), 1));
+            Place(candidates, Labels.Volts(level), 10, Ink);
+        }
+        foreach (var (at, text, size, colour) in labels) sketch.Text(at, text, size, colour, TextAnchor.Middle, halo: true);
+
+        // 10. The markers on top.
+        foreach (var m in markers)
+        {
+            var at = new SKPoint((float)m.PixelX, (float)m.PixelY);
+            sketch.Circle(at, 9, SKColors.White, MarkerEdge, 2);
+            sketch.Text(new SKPoint(at.X, at.Y + 4), m.Rank.ToString(System.Globalization.CultureInfo.InvariantCulture), 11, MarkerEdge, TextAnchor.Middle);
         }
 
         // 11. Frame, title, colour bar, scale bar.
