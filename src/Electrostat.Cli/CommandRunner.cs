@@ -6,10 +6,16 @@ namespace Electrostat.Cli;
 internal static class CommandRunner
 {
     /// <summary>Every command, in the order shown by <c>electrostat help</c>.</summary>
-    public static IReadOnlyList<ICommand> Commands { get; } = [new CheckCommand(), new SolveCommand()];
+    public static IReadOnlyList<ICommand> Commands { get; } = [new InitCommand(), new CheckCommand(), new SolveCommand(), new SweepCommand(), new MaterialsCommand()];
 
     /// <summary>Runs the command line; never throws, never prints a stack trace.</summary>
-    public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr)
+    public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr) => Run(args, stdout, stderr, CancellationToken.None);
+
+    /// <summary>True when the command named by the arguments stops cleanly on cancellation (Ctrl-C handling in Program).</summary>
+    public static bool SupportsCancellation(IReadOnlyList<string> args) => args.Count > 0 && Find(args[0]) is ICancellableCommand;
+
+    /// <summary>Runs the command line with a cancellation token (Ctrl-C); a cancelled run exits with <see cref="Cancellation.ExitCode"/>.</summary>
+    public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr, CancellationToken token)
     {
         ArgumentNullException.ThrowIfNull(args);
         if (args.Count == 0 || args[0] is "help" or "--help" or "-h")
@@ -44,7 +50,12 @@ internal static class CommandRunner
         try
         {
             var parsed = ParsedArguments.Parse(rest, command.Options);
-            return command.Run(parsed, stdout, stderr);
+            return command is ICancellableCommand cc ? cc.Run(parsed, stdout, stderr, token) : command.Run(parsed, stdout, stderr);
+        }
+        catch (OperationCanceledException) when (token.IsCancellationRequested)
+        {
+            stderr.WriteLine($"electrostat {command.Name}: {Cancellation.Message}");
+            return Cancellation.ExitCode;
         }
         catch (UsageException e)
         {
@@ -72,6 +83,14 @@ internal static class CommandRunner
         foreach (var c in Commands) w.WriteLine($"  {c.Name,-10} {c.Summary}");
         w.WriteLine();
         w.WriteLine("Run 'electrostat <command> --help' for the options of a command.");
+        w.WriteLine();
+        w.WriteLine("examples:");
+        w.WriteLine("  electrostat init my-gap.json                                  write a starter design");
+        w.WriteLine("  electrostat solve my-gap.json --accuracy coarse               peak fields, margins, capacitance");
+        w.WriteLine("  electrostat sweep my-gap.json --vary gap=2..12 --goal \"margin >= 2\"   smallest gap with margin 2");
+        w.WriteLine("  electrostat materials                                         built-in material presets");
+        w.WriteLine();
+        w.WriteLine("exit codes: 0 pass, 1 check failed (or goal not met), 2 input error, 3 solver failure, 130 cancelled.");
     }
 
     private static int Distance(string a, string b)

@@ -226,7 +226,7 @@ internal sealed class DesignReader
             if (eps is null) continue;
             if (preset is not null && m["breakdown_field"] is null)
                 _sink.Note(m["preset"], $"{what} takes the typical breakdown field of preset \"{preset.Name}\" ({UnitTable.Format(preset.BreakdownFieldVoltsPerMetre, QuantityKind.Field)})",
-                    "enter the rated \"breakdown_field\" of your own material: " + MaterialPresets.Caution);
+                    "typical, not rated: enter the rated \"breakdown_field\" of your own material (electrostat materials shows the caution)");
             if (eps < 1)
                 _sink.Warning(epsToken, $"{what} has relative permittivity {eps:G6} < 1, unusual for a passive dielectric", "check the value");
             result[prop.Name] = new Material(prop.Name, eps.Value, breakdown);
@@ -261,8 +261,8 @@ internal sealed class DesignReader
             string name = use is JProperty jp ? jp.Name : (string)use!;
             if (materials.ContainsKey(name) || name == Material.Vacuum.Name || MaterialPresets.Find(name) is not { } preset) continue;
             materials[name] = MaterialPresets.ToMaterial(preset, name);
-            _sink.Note(use, $"material \"{name}\" is the built-in preset: relative permittivity {preset.RelativePermittivity.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)}, typical breakdown field {UnitTable.Format(preset.BreakdownFieldVoltsPerMetre, QuantityKind.Field)} ({preset.Source})",
-                $"to use your rated value, declare \"materials\": {{\"{name}\": {{\"preset\": \"{name}\", \"breakdown_field\": \"...\"}}}}. " + MaterialPresets.Caution);
+            _sink.Note(use, $"material \"{name}\" is the built-in preset: relative permittivity {preset.RelativePermittivity.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)}, typical breakdown field {UnitTable.Format(preset.BreakdownFieldVoltsPerMetre, QuantityKind.Field)}",
+                $"typical, not rated: declare \"materials\": {{\"{name}\": {{\"preset\": \"{name}\", \"breakdown_field\": \"...\"}}}} with the rated value of your material (electrostat materials shows the caution)");
         }
     }
 
