@@ -6,7 +6,7 @@ namespace Electrostat.Cli;
 internal static class CommandRunner
 {
     /// <summary>Every command, in the order shown by <c>electrostat help</c>.</summary>
-    public static IReadOnlyList<ICommand> Commands { get; } = [new InitCommand(), new CheckCommand(), new SolveCommand(), new SweepCommand(), new MaterialsCommand()];
+    public static IReadOnlyList<ICommand> Commands { get; } = [new InitCommand(), new CheckCommand(), new SolveCommand(), new SweepCommand(), new ValidateCommand(), new MaterialsCommand()];
 
     /// <summary>Runs the command line; never throws, never prints a stack trace.</summary>
     public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr) => Run(args, stdout, stderr, CancellationToken.None);
