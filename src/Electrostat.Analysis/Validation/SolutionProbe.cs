@@ -126,6 +126,42 @@ public static class SolutionProbe
         return new ValidationMeasurement(Math.Pow(2, -slope), double.NaN);
     }
 
+    /// <summary>
+    /// The field ratio |E(r/2)| / |E(r)| of a singular corner from the potential instead of the field: a least-squares
+    /// fit of log|φ(r) − V| against log r at r0·2^k (k = 0 … steps) along a ray, with V the corner's conductor potential,
+    /// gives the exponent λ of φ − V ~ r^λ, and since E = −∇φ ~ r^(λ−1) the ratio is 2^(1−λ) (Jackson, Classical
+    /// Electrodynamics, 3rd ed., §2.11). The P1 potential is resolved two elements from the corner, where the
+    /// recovered field is not yet. No estimate.
+    /// </summary>
+    /// <param name="outcome">A solve outcome.</param>
+    /// <param name="conductorPotentialVolts">Potential of the conductor owning the corner, volts.</param>
+    /// <param name="cornerX">Corner x, metres.</param>
+    /// <param name="cornerY">Corner y, metres.</param>
+    /// <param name="directionX">Ray direction x (normalised here).</param>
+    /// <param name="directionY">Ray direction y.</param>
+    /// <param name="smallestDistanceMetres">r0, metres (raised to two local element sizes when the mesh is coarser).</param>
+    /// <param name="steps">Number of doublings beyond r0.</param>
+    public static ValidationMeasurement CornerFieldRatioFromPotential(SolveOutcome outcome, double conductorPotentialVolts, double cornerX, double cornerY,
+        double directionX, double directionY, double smallestDistanceMetres, int steps)
+    {
+        ArgumentNullException.ThrowIfNull(outcome);
+        double localSize = LongestEdgeAt(outcome.Adaptive.Solution.Mesh, cornerX, cornerY);
+        smallestDistanceMetres = Math.Max(smallestDistanceMetres, 2 * localSize);
+        double norm = Math.Sqrt(directionX * directionX + directionY * directionY);
+        double ux = directionX / norm, uy = directionY / norm;
+        double sx = 0, sy = 0, sxx = 0, sxy = 0;
+        int n = 0;
+        for (int k = 0; k <= steps; k++)
+        {
+            double r = smallestDistanceMetres * Math.Pow(2, k);
+            double phi = PotentialAt(outcome, cornerX + r * ux, cornerY + r * uy).Value;
+            double lx = Math.Log(r), ly = Math.Log(Math.Abs(phi - conductorPotentialVolts));
+            sx += lx; sy += ly; sxx += lx * lx; sxy += lx * ly; n++;
+        }
+        double lambda = (n * sxy - sx * sy) / (n * sxx - sx * sx);
+        return new ValidationMeasurement(Math.Pow(2, 1 - lambda), double.NaN);
+    }
+
     /// <summary>The longest edge of the triangles touching the mesh vertex nearest to a point, metres.</summary>
     private static double LongestEdgeAt(Meshing.TriangleMesh mesh, double x, double y)
     {
