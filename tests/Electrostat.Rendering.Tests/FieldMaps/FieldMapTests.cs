@@ -162,7 +162,71 @@ public class FieldMapTests
         var second = FieldMapRenderer.Render(ctx, report.HotSpots, new FieldMapOptions { MeshOverlay = true });
         Assert.Equal(first.Png(), second.Png());
         Assert.Equal(first.Svg(), second.Svg());
-        Assert.Contains("<svg", first.Svg(), StringComparison.Ordinal);
+        // The SVG is well-formed XML with the raster layer and vector lines.
+        var svg = System.Xml.Linq.XDocument.Parse(first.Svg());
+        Assert.Equal("svg", svg.Root!.Name.LocalName);
+        Assert.Contains(svg.Root.Elements(), e => e.Name.LocalName == "image");
+        Assert.Contains(svg.Root.Elements(), e => e.Name.LocalName == "path");
+    }
+
+    [Fact]
+    public void LogScale_PerElementColourFollowsTheLogarithmOfTheElementField()
+    {
+        // t = ln(|E_T| / min) / ln(max / min) for the triangle under the pixel; sample pixel centres across the gap
+        // on a 30° ray (clear of labels, which are off, and of the axis-aligned markers, which are off).
+        var ctx = Designs.CoaxContext();
+        var map = FieldMapRenderer.Render(ctx, [], Plain with { LogScale = true });
+        using var raster = Drawing.PngPainter.Paint(map.Sketch, rasterOnly: true);
+        var f = map.Frame;
+        double lnSpan = Math.Log(map.ColourMaxVoltsPerMetre / map.ColourMinVoltsPerMetre);
+        int checkedPixels = 0;
+        for (double r = 2.3e-3; r < 9.7e-3; r += 0.25e-3)
+        {
+            double x = r * Math.Cos(Math.PI / 6), y = r * Math.Sin(Math.PI / 6);
+            int px = (int)Math.Floor(f.PixelX(x)), py = (int)Math.Floor(f.PixelY(y));
+            // The triangle under the pixel centre.
+            double cx = f.DesignX(px + 0.5), cy = f.DesignY(py + 0.5);
+            int t = TriangleAt(ctx, cx, cy);
+            if (t < 0 || NearEdge(ctx, t, cx, cy, 1.5 / f.PixelsPerMetre)) continue;
+            double expectedT = Math.Log(ctx.Solution.FieldMagnitude(t) / map.ColourMinVoltsPerMetre) / lnSpan;
+            AssertClose(Viridis.At(expectedT), raster.GetPixel(px, py));
+            checkedPixels++;
+        }
+        Assert.True(checkedPixels >= 10, $"only {checkedPixels} pixels checked");
+    }
+
+    private static int TriangleAt(AnalysisContext ctx, double x, double y)
+    {
+        var m = ctx.Mesh;
+        for (int t = 0; t < m.TriangleCount; t++)
+        {
+            if (Barycentric(ctx, t, x, y).Min() >= 0) return t;
+        }
+        return -1;
+    }
+
+    private static double[] Barycentric(AnalysisContext ctx, int t, double x, double y)
+    {
+        var m = ctx.Mesh;
+        int a = m.Triangles[3 * t], b = m.Triangles[3 * t + 1], c = m.Triangles[3 * t + 2];
+        double det = (m.X[b] - m.X[a]) * (m.Y[c] - m.Y[a]) - (m.X[c] - m.X[a]) * (m.Y[b] - m.Y[a]);
+        double l1 = ((x - m.X[a]) * (m.Y[c] - m.Y[a]) - (m.X[c] - m.X[a]) * (y - m.Y[a])) / det;
+        double l2 = ((m.X[b] - m.X[a]) * (y - m.Y[a]) - (x - m.X[a]) * (m.Y[b] - m.Y[a])) / det;
+        return [1 - l1 - l2, l1, l2];
+    }
+
+    // True when the point is within distance d of an edge of triangle t (a pixel there may mix two triangles).
+    private static bool NearEdge(AnalysisContext ctx, int t, double x, double y, double d)
+    {
+        var m = ctx.Mesh;
+        for (int i = 0; i < 3; i++)
+        {
+            int a = m.Triangles[3 * t + i], b = m.Triangles[3 * t + (i + 1) % 3];
+            double ex = m.X[b] - m.X[a], ey = m.Y[b] - m.Y[a];
+            double dist = Math.Abs(ex * (y - m.Y[a]) - ey * (x - m.X[a])) / Math.Sqrt(ex * ex + ey * ey);
+            if (dist < d) return true;
+        }
+        return false;
     }
 
     private static void AssertClose(SKColor expected, SKColor actual)
