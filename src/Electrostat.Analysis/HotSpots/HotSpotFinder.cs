@@ -93,8 +93,15 @@ public static class HotSpotFinder
         return result;
     }
 
-    internal static HotSpotKind KindOf(AnalysisContext context, int v)
+    /// <summary>
+    /// What a mesh vertex sits on: a triple point (on a conductor or the wall, with two different materials around
+    /// it), a conductor surface, an interface, or the volume.
+    /// </summary>
+    /// <param name="context">The analysis context.</param>
+    /// <param name="v">Vertex index.</param>
+    public static HotSpotKind KindOf(AnalysisContext context, int v)
     {
+        ArgumentNullException.ThrowIfNull(context);
         var topo = context.Topology;
         if (topo.VertexConductor[v] >= 0 || topo.VertexOnEnclosure[v])
         {
