@@ -9,8 +9,14 @@ public sealed record FieldMapOptions
     /// <summary>Per-element or recovered shading.</summary>
     public FieldShading Shading { get; init; } = FieldShading.Recovered;
 
-    /// <summary>True for a logarithmic colour scale (useful when a sharp edge dwarfs the rest of the field).</summary>
-    public bool LogScale { get; init; }
+    /// <summary>
+    /// True for a logarithmic colour scale, false for linear, null to choose: logarithmic when the peak exceeds
+    /// <see cref="AutoLogRatio"/> times the median |E| (a sharp edge that would leave the rest of a linear map dark).
+    /// </summary>
+    public bool? LogScale { get; init; }
+
+    /// <summary>Peak-to-median |E| ratio above which the automatic choice is logarithmic (dimensionless).</summary>
+    public double AutoLogRatio { get; init; } = 20;
 
     /// <summary>Wanted number of intervals between equipotentials (the step is rounded to 1, 2, 2.5 or 5 × 10ⁿ volts).</summary>
     public int EquipotentialIntervals { get; init; } = 10;

@@ -72,8 +72,9 @@ public static class FieldMapRenderer
         // A field uniform to 0.1 % (a plate gap) is shaded in one mid colour: spreading solver round-off over the
         // whole colour map would paint noise. The bar still prints the exact extremes.
         bool uniform = !(fMax - fMin > UniformSpread * Math.Abs(fMax));
+        bool logScale = !uniform && (options.LogScale ?? fMax > options.AutoLogRatio * Median(corner));
         double logFloor = Math.Max(fMin, fMax * 1e-4);
-        double ToT(double v) => uniform ? 0.5 : options.LogScale
+        double ToT(double v) => uniform ? 0.5 : logScale
             ? Math.Log(Math.Max(v, logFloor) / logFloor) / Math.Log(fMax / logFloor)
             : (v - fMin) / (fMax - fMin);
 
@@ -238,10 +239,10 @@ public static class FieldMapRenderer
         // 11. Frame, title, colour bar, scale bar.
         sketch.Polyline([new(mapRect.Left, mapRect.Top), new(mapRect.Right, mapRect.Top), new(mapRect.Right, mapRect.Bottom), new(mapRect.Left, mapRect.Bottom)], Ink, 1f, closed: true);
         if (options.Title is string title) sketch.Text(new SKPoint(SideMargin, 22), title, 15, Ink);
-        DrawColourBar(sketch, mapRect, fMin, fMax, options.LogScale && !uniform, logFloor, uniform);
+        DrawColourBar(sketch, mapRect, fMin, fMax, logScale, logFloor, uniform);
         DrawScaleBar(sketch, frame, mapRect, context.Design.Units);
 
-        return new FieldMapPicture(sketch, frame, fMin, fMax, options.LogScale, lines, levels, markers);
+        return new FieldMapPicture(sketch, frame, fMin, fMax, logScale, lines, levels, markers);
     }
 
     // The whole design: the meshed field region and the enclosure (conductors at the edge lie outside the mesh).
@@ -269,6 +270,14 @@ public static class FieldMapRenderer
         return (minX, minY, maxX, maxY);
     }
 
+    private static double Median(double[] values)
+    {
+        if (values.Length == 0) return 0;
+        var copy = (double[])values.Clone();
+        Array.Sort(copy);
+        return copy[copy.Length / 2];
+    }
+
     private static SKPoint[] Ring(Contour contour, double chord, Func<double, double, double, SKPoint> p, double sign) =>
         contour.Flatten(chord).Select(q => p(q.X, q.Y, sign)).ToArray();
 
@@ -287,6 +296,9 @@ public static class FieldMapRenderer
         // Extremes printed exactly (kV/mm), then round ticks between them.
         sketch.Text(new SKPoint(left + width + 4, top + 4), Labels.Number(fMax * 1e-6), 10, Ink);
         sketch.Text(new SKPoint(left + width + 4, bottom + 4), Labels.Number((log ? logFloor : fMin) * 1e-6), 10, Ink);
+        // A log scale starts at 10⁻⁴ of the peak at most; the true minimum is then printed under the bar.
+        if (log && logFloor > fMin) sketch.Text(new SKPoint(left - 2, bottom + 18), "min " + Labels.Number(fMin * 1e-6), 10, Ink);
+        sketch.Text(new SKPoint(left - 2, bottom + (log && logFloor > fMin ? 31 : 18)), log ? "log scale" : "linear scale", 10, Ink);
         if (uniform)
         {
             sketch.Text(new SKPoint(left + width + 4, (top + bottom) / 2), "uniform", 10, Ink);

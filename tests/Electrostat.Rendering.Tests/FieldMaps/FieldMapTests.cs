@@ -112,6 +112,8 @@ public class FieldMapTests
         }
         Assert.Equal(min, map.ColourMinVoltsPerMetre);
         Assert.Equal(max, map.ColourMaxVoltsPerMetre);
+        // Peak over median is about 3 here (|E| ∝ 1/r from r = 2 to 10 mm), so the automatic scale is linear.
+        Assert.False(map.LogScale);
         // Closed form bounds the extremes: |E| = V/(r ln(b/a)) runs from V/(b ln 5) to V/(a ln 5) (Griffiths §2.3);
         // element values are averages over triangles, so they lie inside and near these ends.
         double eA = Designs.CoaxV / (Designs.CoaxA * Math.Log(5)), eB = Designs.CoaxV / (Designs.CoaxB * Math.Log(5));
