@@ -8,7 +8,7 @@ public class SolveCommandTests
 {
     private static string SchemaPath => Path.Combine(RepoPaths.Root, "docs", "results.schema.json");
 
-    // What each example is meant to show: the HV fixture's air gap and the feedthrough's air pocket at the flange fillet
+    // What each example is meant to show: the HV fixture's air gap and the feedthrough's air at the rod's rounded end
     // fail their margins; the sensor and the validation cases pass.
     public static TheoryData<string, int> Examples() => new()
     {
@@ -23,8 +23,11 @@ public class SolveCommandTests
     [Fact]
     public void Examples_CoverEveryDesignInGeometries()
     {
-        var listed = Examples().Select(row => Path.GetFullPath(Path.Combine(RepoPaths.Geometries, (string)row[0]))).Order(StringComparer.Ordinal);
-        Assert.Equal(RepoPaths.ExampleDesigns().Select(Path.GetFullPath).Order(StringComparer.Ordinal), listed);
+        // Every scenario design at the top of geometries/ is solved here; the many closed-form cases in validation/
+        // belong to the validate command and its tests.
+        var listed = Examples().Select(row => Path.GetFullPath(Path.Combine(RepoPaths.Geometries, (string)row[0]))).ToHashSet(StringComparer.Ordinal);
+        var topLevel = Directory.EnumerateFiles(RepoPaths.Geometries, "*.json").Select(Path.GetFullPath);
+        Assert.All(topLevel, p => Assert.Contains(p, listed));
     }
 
     [Theory]

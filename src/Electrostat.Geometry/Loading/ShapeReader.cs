@@ -24,6 +24,20 @@ internal sealed class ShapeReader(ReadContext ctx)
     /// <summary>Reads a shape with optional holes; null after reporting problems.</summary>
     public Shape? Read(JToken? token, string what, bool allowHoles = true)
     {
+        try
+        {
+            return ReadUnguarded(token, what, allowHoles);
+        }
+        catch (Exception e) when (e is ArgumentException or GeometryException)
+        {
+            // Safety net: numerical corner cases the checks above did not foresee still become one located message.
+            Sink.Error(token, $"{what}: the outline cannot be built ({e.Message})", "check the coordinates and radii of this shape");
+            return null;
+        }
+    }
+
+    private Shape? ReadUnguarded(JToken? token, string what, bool allowHoles)
+    {
         var obj = ctx.AsObject(token, what);
         if (obj is null) return null;
         var typeToken = ctx.Required(obj, "type", what, "add \"type\": \"rectangle\", \"circle\", \"polygon\" or \"path\"");
@@ -204,7 +218,7 @@ internal sealed class ShapeReader(ReadContext ctx)
                         "put the centre away from the current point and use a sweep between -360 and 360 deg, not 0", c);
                     return null;
                 }
-                var arc = new ArcSegment(c.Value, r, Math.Atan2(current.Y - c.Value.Y, current.X - c.Value.X), sweep.Value);
+                var arc = new ArcSegment(c.Value, r, Math.Atan2(current.Y - c.Value.Y, current.X - c.Value.X), sweep.Value, current, null);
                 segments.Add(arc);
                 current = arc.End;
             }
@@ -232,8 +246,8 @@ internal sealed class ShapeReader(ReadContext ctx)
                 double sweep = a1 - a0;
                 if (dir == "ccw") { while (sweep <= 0) sweep += 2 * Math.PI; }
                 else { while (sweep >= 0) sweep -= 2 * Math.PI; }
-                // End exactly on the requested point: keep the angle, snap the next segment's start to the given point.
-                segments.Add(new ArcSegment(c.Value, r0, a0, sweep));
+                // The arc starts and ends exactly on the given points (r1 equals r0 to 1e-6; the stored end is the given point).
+                segments.Add(new ArcSegment(c.Value, r0, a0, sweep, current, ScaleOntoCircle(to.Value, c.Value, r0)));
                 current = segments[^1].End;
             }
             else
@@ -251,6 +265,8 @@ internal sealed class ShapeReader(ReadContext ctx)
         double scale = segments.Aggregate(BoundingBox.Empty, (b, s) => b.Include(s.Start).Include(s.End)).Diagonal;
         if (current.DistanceTo(start.Value) > 1e-9 * scale)
             segments.Add(new LineSegment(current, start.Value)); // a path closes itself with a straight line
+        else if (segments[^1] is ArcSegment last)
+            segments[^1] = last.WithEnd(start.Value); // an arc that returns to the start closes exactly
         // Make each joint exact: a line starts where the previous segment really ends (arc ends come from trigonometry).
         for (int i = 0; i < segments.Count; i++)
         {
@@ -275,6 +291,13 @@ internal sealed class ShapeReader(ReadContext ctx)
             Sink.Error(arr, $"{what}: the path segments do not join up", "check that each arc ends where the next segment starts");
             return null;
         }
+    }
+
+    /// <summary>The given point if it is on the circle to rounding, else its projection onto the circle.</summary>
+    private static Point2 ScaleOntoCircle(Point2 p, Point2 center, double radius)
+    {
+        double d = p.DistanceTo(center);
+        return Math.Abs(d - radius) <= 1e-12 * radius ? p : center + (radius / d) * (p - center);
     }
 
     /// <summary>Zero area and self-intersection checks on one outline.</summary>

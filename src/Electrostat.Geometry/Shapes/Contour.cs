@@ -103,13 +103,18 @@ public sealed class Contour
                 if (p.Y < arc.Center.Y - arc.Radius || p.Y > arc.Center.Y + arc.Radius) continue;
                 // Walk the y-monotone pieces between the turning angles θ = π/2 + kπ (no allocation: hot path).
                 double lo = Math.Min(arc.StartAngle, arc.EndAngle), hi = Math.Max(arc.StartAngle, arc.EndAngle);
+                // The stored end points (shared bit for bit with the neighbours) stand for the angles lo and hi.
+                double yLo = (arc.SweepAngle >= 0 ? arc.Start : arc.End).Y;
+                double yHi = (arc.SweepAngle >= 0 ? arc.End : arc.Start).Y;
                 double a0 = lo;
                 double cut = Math.PI / 2 + Math.Ceiling((lo - Math.PI / 2) / Math.PI) * Math.PI;
                 while (a0 < hi)
                 {
                     if (cut <= a0) { cut += Math.PI; continue; }
                     double a1 = Math.Min(cut, hi);
-                    if (PieceCrosses(arc, a0, a1, p)) inside = !inside;
+                    double ya = a0 == lo ? yLo : arc.Center.Y + arc.Radius * Math.Sin(a0);
+                    double yb = a1 == hi ? yHi : arc.Center.Y + arc.Radius * Math.Sin(a1);
+                    if (PieceCrosses(arc, a0, a1, ya, yb, p)) inside = !inside;
                     a0 = a1;
                     cut += Math.PI;
                 }
@@ -160,10 +165,8 @@ public sealed class Contour
     }
 
     /// <summary>Whether the ray from p towards +x crosses the y-monotone arc piece between angles a0 &lt; a1 (half-open in y).</summary>
-    private static bool PieceCrosses(ArcSegment arc, double a0, double a1, Point2 p)
+    private static bool PieceCrosses(ArcSegment arc, double a0, double a1, double ya, double yb, Point2 p)
     {
-        double ya = arc.Center.Y + arc.Radius * Math.Sin(a0);
-        double yb = arc.Center.Y + arc.Radius * Math.Sin(a1);
         if ((ya > p.Y) == (yb > p.Y)) return false;
         // On a y-monotone piece cos θ keeps its sign, so the crossing lies on one side of the centre.
         double side = Math.Cos(0.5 * (a0 + a1)) >= 0 ? 1 : -1;

@@ -50,7 +50,7 @@ public sealed record LineSegment : CurveSegment
     {
         int n = 1;
         if (maxSegmentLengthMetres > 0 && double.IsFinite(maxSegmentLengthMetres))
-            n = Math.Max(1, (int)Math.Ceiling(Length / maxSegmentLengthMetres));
+            n = (int)Math.Clamp(Math.Ceiling(Length / maxSegmentLengthMetres), 1, 1 << 20); // cap: a scale mismatch, not a need
         for (int i = 1; i < n; i++) points.Add(PointAt((double)i / n));
         points.Add(EndPoint);
     }

@@ -86,7 +86,12 @@ public static class ShapeFactory
             double r = vertices[i].FilletRadiusMetres;
             if (theta < 1e-9)
                 throw new GeometryException($"the outline folds back on itself at point {i} (a zero-angle spike)", i, p, "remove the point or move it");
-            if (r == 0 || Math.PI - theta < 1e-9) continue; // sharp corner, or straight (nothing to round)
+            // Sharp corner, or straight to within 1e-6 rad: such a fillet would leave the line by r·1e-13, and its centre
+            // (on a bisector of length 2 cos(θ/2)) could not be placed accurately.
+            if (r == 0 || Math.PI - theta < 1e-6) continue;
+            double scale = Math.Max(Math.Max(Math.Abs(p.X), Math.Abs(p.Y)), Math.Max((a - p).Length, (b - p).Length));
+            if (r < 1e-9 * scale)
+                throw new GeometryException(string.Create(CultureInfo.InvariantCulture, $"fillet radius {r:G3} m at point {i} is too small to represent at this position"), i, p, "use 0 for a sharp corner");
             d[i] = r / Math.Tan(0.5 * theta);
             var t1 = p + d[i] * u1;
             var t2 = p + d[i] * u2;
@@ -94,7 +99,14 @@ public static class ShapeFactory
             var c = p + (r / Math.Sin(0.5 * theta) / bis.Length) * bis;
             double start = Math.Atan2(t1.Y - c.Y, t1.X - c.X);
             double sweep = Math.Sign(cross) * (Math.PI - theta);
-            arcs[i] = new ArcSegment(c, r, start, sweep);
+            try
+            {
+                arcs[i] = new ArcSegment(c, r, start, sweep, t1, t2); // end points: the tangency points themselves
+            }
+            catch (ArgumentException)
+            {
+                throw new GeometryException($"the fillet at point {i} cannot be constructed accurately (the corner is almost straight or degenerate)", i, p, "use 0 for this corner or move the point");
+            }
         }
 
         for (int i = 0; i < n; i++)
@@ -112,6 +124,18 @@ public static class ShapeFactory
                     culprit, vertices[culprit].Point,
                     string.Create(CultureInfo.InvariantCulture, $"reduce the fillet radius at point {culprit} to at most {maxR * 1e3:G6} mm"));
             }
+        }
+
+        // Where a fillet uses up a whole edge, make the joint exact: fillets meeting share one point, and a fillet
+        // reaching a sharp corner ends exactly on it (otherwise rounding leaves ~1e-17 m slivers, or r = -6e-19).
+        for (int i = 0; i < n; i++)
+        {
+            int j = (i + 1) % n;
+            double len = vertices[i].Point.DistanceTo(vertices[j].Point);
+            double tiny = 1e-12 * len;
+            if (arcs[i] is { } ai && arcs[j] is { } aj && ai.End.DistanceTo(aj.Start) <= tiny) arcs[j] = aj.WithStart(ai.End);
+            else if (arcs[i] is { } ai2 && arcs[j] is null && ai2.End.DistanceTo(vertices[j].Point) <= tiny) arcs[i] = ai2.WithEnd(vertices[j].Point);
+            else if (arcs[i] is null && arcs[j] is { } aj2 && aj2.Start.DistanceTo(vertices[i].Point) <= tiny) arcs[j] = aj2.WithStart(vertices[i].Point);
         }
 
         var segments = new List<CurveSegment>(2 * n);

@@ -39,7 +39,7 @@ public class MalformedDesignTests
         ["corner-radius-too-large"] = new([("\"max\": [30, 30] }", "\"max\": [30, 30], \"corner_radius\": 6 }")], "at most 5 mm", "\"corner_radius\"", false),
         ["duplicate-name"] = new([("\"name\": \"gnd\"", "\"name\": \"hv\"")], "duplicate conductor name \"hv\"", "\"hv\", \"potential\": 0", true),
         ["unknown-material"] = new([("\"material\": \"oil\"", "\"material\": \"oill\"")], "did you mean 'oil'?", "\"oill\"", true),
-        ["unknown-background"] = new([("\"background\": \"oil\"", "\"background\": \"air\"")], "unknown material \"air\" for the background", "\"air\"", true),
+        ["unknown-background"] = new([("\"background\": \"oil\"", "\"background\": \"xyzzy\"")], "unknown material \"xyzzy\" for the background", "\"xyzzy\"", true),
         ["zero-permittivity"] = new([("\"relative_permittivity\": 2.2", "\"relative_permittivity\": 0")], "relative_permittivity must be greater than zero", "0, \"breakdown", true),
         ["negative-breakdown"] = new([("\"10 kV/mm\"", "\"-1 kV/mm\"")], "breakdown_field must be greater than zero", "\"-1 kV/mm\"", true),
         ["short-circuit-overlap"] = new([("\"max\": [20, 0]", "\"max\": [20, 6]")], "short circuit: conductors \"hv\" (10 kV) and \"gnd\" (0 V) overlap", "{ \"name\": \"gnd\"", true),

@@ -135,4 +135,33 @@ public class ShapeFactoryTests
         Assert.False(c.Contains(new Point2(1 + r, 1 + r)));
         Assert.True(c.Contains(new Point2(1.02, 1.02))); // filled by the fillet
     }
+
+    [Fact]
+    public void FilletUsingWholeEdge_EndsExactlyOnTheNeighbourVertex()
+    {
+        // A rod drawn on the axis with a fully rounded end: the fillet of radius 4 at (4, -40) uses the whole 4 mm edge
+        // from the axis, so it must end exactly at (0, -40), not at r = -6e-19 (which an axisymmetric mesh rejects).
+        var c = ShapeFactory.Polygon([new(new Point2(0, -40)), new(new Point2(4, -40), 4), new(new Point2(4, 40), 4), new(new Point2(0, 40))]);
+        foreach (var seg in c.Segments)
+        {
+            Assert.True(seg.Start.X >= 0 && seg.End.X >= 0, seg.ToString());
+            foreach (var p in c.Flatten(1e-3)) Assert.True(p.X >= 0, p.ToString());
+        }
+        Assert.Contains(c.Segments, seg => seg.Start == new Point2(0, -40) || seg.End == new Point2(0, -40));
+        // Joints are exact: each segment starts where the previous one ends, bit for bit.
+        for (int i = 0; i < c.Segments.Count; i++)
+            Assert.Equal(c.Segments[i].End, c.Segments[(i + 1) % c.Segments.Count].Start);
+        // Half disc of radius 4 at each end plus an 8 × 72 rectangle... as halves: area = 4·80 − 2·(4² − π·4²/4).
+        Assert.Equal(4 * 80 - 2 * (16 - Math.PI * 4), c.Area, 1e-9);
+    }
+
+    [Fact]
+    public void Circle_QuarterPointsAreExact()
+    {
+        var c = ShapeFactory.Circle(new Point2(0, 0), 3);
+        Assert.Equal(new Point2(0, 3), c.Segments[0].End);
+        Assert.Equal(new Point2(-3, 0), c.Segments[1].End);
+        Assert.Equal(new Point2(0, -3), c.Segments[2].End);
+        Assert.Equal(new Point2(3, 0), c.Segments[3].End);
+    }
 }
