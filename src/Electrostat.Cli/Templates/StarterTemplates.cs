@@ -6,7 +6,7 @@ internal static class StarterTemplates
     /// <summary>Template names with one line each, in the order listed by <c>init --help</c>; the first is the default.</summary>
     public static IReadOnlyList<(string Name, string Summary)> All { get; } =
     [
-        ("electrode-pair", "planar: 10 kV bar facing a grounded bar in air; margin and clearance checks"),
+        ("electrode-pair", "planar: 6 kV bar facing a grounded bar in air; margin and clearance checks"),
         ("sensor", "planar: two-pad capacitive sensor on FR-4 with a grounded target above"),
         ("axisymmetric", "axisymmetric: rod with a rounded end above a grounded plane in transformer oil"),
     ];
