@@ -19,8 +19,10 @@ public class ExampleDesignAnalysisTests
     {
         var report = Analyze("hv-electrode-over-plate.json", out var ctx);
         Assert.InRange(report.HotSpots.Count, 2, 10);
-        // Bar and plate are both rounded (tangent fillets): no singular corner, so no corner warning.
-        Assert.Empty(report.SingularCorners);
+        // The bar is rounded (tangent fillets): any singular corner can only be on the plate, one per sharp plate corner.
+        Assert.DoesNotContain(report.SingularCorners, c => c.ConductorName == "hv_bar");
+        Assert.Equal(Electrostat.Analysis.Corners.SingularCornerDetector.FindCornerPoints(ctx.Design).Count, report.SingularCorners.Count);
+        Assert.Equal(report.SingularCorners.Count, report.Warnings.Count(w => w.Contains("Sharp corner", StringComparison.Ordinal)));
         // Where the epoxy spacer meets the bar and the plate there are vertices with both air and epoxy around them.
         Assert.Contains(Enumerable.Range(0, ctx.Mesh.VertexCount), v => HotSpotFinder.KindOf(ctx, v) == HotSpotKind.TriplePoint);
         // Margins: both materials have breakdown fields and requirements, so both are checked.
