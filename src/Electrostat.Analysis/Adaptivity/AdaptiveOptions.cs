@@ -39,4 +39,8 @@ public sealed record AdaptiveOptions
 
     /// <summary>Linear solver options.</summary>
     public FieldSolverOptions Solver { get; init; } = new();
+
+    /// <summary>Called on the solving thread after each level is measured (before the convergence test), e.g. for
+    /// progress; null for none. A callback may cancel the run's token: the loop checks it before the next level.</summary>
+    public Action<AdaptiveLevel>? LevelCompleted { get; init; }
 }

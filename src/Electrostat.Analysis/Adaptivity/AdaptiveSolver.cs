@@ -30,10 +30,14 @@ public static class AdaptiveSolver
     /// <param name="mesh">The refinable initial mesh (refined in place).</param>
     /// <param name="options">Loop options.</param>
     /// <param name="initialMeshSeconds">Time already spent making the initial mesh (counted in level 0), seconds.</param>
+    /// <param name="cancellationToken">Checked before each level (solve) and after each refinement; a level in progress
+    /// runs to its end.</param>
     /// <returns>The result.</returns>
     /// <exception cref="Fem.Assembly.FieldProblemException">The design cannot be posed as a field problem (user error).</exception>
     /// <exception cref="SolveFailedException">A linear solve did not converge.</exception>
-    public static AdaptiveResult Run(Design design, DesignMeshInput input, RefinableMesh mesh, AdaptiveOptions options, double initialMeshSeconds = 0)
+    /// <exception cref="OperationCanceledException"><paramref name="cancellationToken"/> was cancelled.</exception>
+    public static AdaptiveResult Run(Design design, DesignMeshInput input, RefinableMesh mesh, AdaptiveOptions options, double initialMeshSeconds = 0,
+        CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(design);
         ArgumentNullException.ThrowIfNull(input);
@@ -53,6 +57,7 @@ public static class AdaptiveSolver
         CapacitanceMatrixResult? cap;
         while (true)
         {
+            cancellationToken.ThrowIfCancellationRequested();
             sw.Restart();
             built = DesignProblemBuilder.Build(design, input, current.Mesh);
             var solver = new FieldSolver(built.Problem, options.Solver);
@@ -73,6 +78,7 @@ public static class AdaptiveSolver
             var level = new AdaptiveLevel(levels.Count, current.Mesh.TriangleCount, current.Mesh.VertexCount, peaks,
                 cap?.Maxwell, eta, solution.Report.Iterations, meshSeconds, solveSeconds, 0);
             levels.Add(level);
+            options.LevelCompleted?.Invoke(level);
 
             if (levels.Count >= Math.Max(2, options.MinLevels) && Settled(levels[^2], levels[^1], options.RelativeTolerance))
             {

@@ -26,10 +26,15 @@ public static class SolvePipeline
     /// <param name="accuracy">Accuracy level; null for <see cref="AccuracyLevel.Normal"/>.</param>
     /// <param name="maxTriangles">Element budget override; null for the level's budget.</param>
     /// <param name="analysisOptions">Analysis options; null for defaults.</param>
+    /// <param name="levelCompleted">Called after each adaptive level (see <see cref="AdaptiveOptions.LevelCompleted"/>); null for none.</param>
+    /// <param name="cancellationToken">Checked after meshing, between adaptive levels and before the analysis.</param>
     /// <returns>The outcome.</returns>
-    public static SolveOutcome Run(Design design, AccuracyLevel? accuracy = null, int? maxTriangles = null, AnalysisOptions? analysisOptions = null)
+    /// <exception cref="OperationCanceledException"><paramref name="cancellationToken"/> was cancelled.</exception>
+    public static SolveOutcome Run(Design design, AccuracyLevel? accuracy = null, int? maxTriangles = null, AnalysisOptions? analysisOptions = null,
+        Action<AdaptiveLevel>? levelCompleted = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(design);
+        cancellationToken.ThrowIfCancellationRequested();
         accuracy ??= AccuracyLevel.Normal;
         int budget = maxTriangles ?? accuracy.MaxTriangles;
         var total = Stopwatch.StartNew();
@@ -42,6 +47,7 @@ public static class SolvePipeline
         var meshOptions = new MeshOptions { MaxTriangles = Math.Max(budget, 1000) * 4 };
         var (input, mesh) = DesignMesher.Create(design, meshOptions, settings);
         double meshSeconds = total.Elapsed.TotalSeconds;
+        cancellationToken.ThrowIfCancellationRequested();
         var options = new AdaptiveOptions
         {
             RelativeTolerance = accuracy.RelativeTolerance,
@@ -50,8 +56,10 @@ public static class SolvePipeline
                 SingularCornerDetector.Detect(new AnalysisContext(design, input.Tags, input.Regions, solution))
                     .Select(c => new ExclusionDisc(c.Location.X, c.Location.Y, c.ReportDistanceMetres, $"corner of {c.ConductorName}"))
                     .ToArray(),
+            LevelCompleted = levelCompleted,
         };
-        var adaptive = AdaptiveSolver.Run(design, input, mesh, options, meshSeconds);
+        var adaptive = AdaptiveSolver.Run(design, input, mesh, options, meshSeconds, cancellationToken);
+        cancellationToken.ThrowIfCancellationRequested();
         var context = new AnalysisContext(design, input.Tags, input.Regions, adaptive.Solution);
         var analysis = DesignAnalyzer.Analyze(context, analysisOptions);
         var warnings = new List<string>();

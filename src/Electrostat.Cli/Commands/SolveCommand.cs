@@ -12,9 +12,9 @@ namespace Electrostat.Cli.Commands;
 /// <summary>
 /// <c>electrostat solve DESIGN</c>: check, mesh, solve with adaptive refinement, analyse, write results.json and the
 /// CSVs, print a summary. Exit 0 when every check passes (or none was requested), 1 when a margin or clearance check
-/// fails, 2 for an input error, 3 when the solver fails.
+/// fails, 2 for an input error, 3 when the solver fails, 130 when cancelled (no result file written).
 /// </summary>
-internal sealed class SolveCommand : ICommand
+internal sealed class SolveCommand : ICancellableCommand
 {
     public string Name => "solve";
 
@@ -22,7 +22,7 @@ internal sealed class SolveCommand : ICommand
 
     public string Usage => """
         usage: electrostat solve DESIGN.json [--out DIR] [--set name=value]... [--accuracy coarse|normal|fine|TOL]
-                                             [--max-elements N]
+                                             [--max-elements N] [--json | --quiet]
         Validates the design, meshes it, solves for the potential with adaptive refinement until the peak field
         per material and the capacitance matrix settle, then reports hot spots, margins, clearances, singular
         corners, energy and forces.
@@ -37,17 +37,25 @@ internal sealed class SolveCommand : ICommand
           --set name=value     override a parameter (repeatable), e.g. --set gap=12 or --set "v_hv=25 kV"
           --accuracy LEVEL     coarse (2 %), normal (0.5 %, default), fine (0.1 %), or a tolerance such as 0.01 or 1%
           --max-elements N     element budget of the adaptive loop (default by accuracy: 50k / 200k / 1M)
-        exit codes: 0 all checks pass, 1 a margin or clearance check fails, 2 input error, 3 solver failure.
+          --json               print results.json on stdout (nothing else on stdout; the files are still written)
+          --quiet              no summary on stdout; the files and the exit code are unchanged
+        Ctrl-C stops the run between adaptive levels; no result file is written (exit 130).
+        exit codes: 0 all checks pass, 1 a margin or clearance check fails, 2 input error, 3 solver failure,
+        130 cancelled.
         """;
 
-    public OptionSpec Options { get; } = new(["set", "out", "accuracy", "max-elements"], [], 1, 1);
+    public OptionSpec Options { get; } = new(["set", "out", "accuracy", "max-elements"], ["json", "quiet"], 1, 1);
 
-    public int Run(ParsedArguments args, TextWriter stdout, TextWriter stderr)
+    public int Run(ParsedArguments args, TextWriter stdout, TextWriter stderr) => Run(args, stdout, stderr, CancellationToken.None);
+
+    public int Run(ParsedArguments args, TextWriter stdout, TextWriter stderr, CancellationToken token)
     {
         string designPath = args.Positionals[0];
         var overrides = DesignInput.ParseOverrides(args.Values("set"));
         var accuracy = ParseAccuracy(args.Values("accuracy"));
         int? budget = ParseBudget(args.Values("max-elements"));
+        bool json = args.Has("json"), quiet = args.Has("quiet");
+        if (json && quiet) throw new UsageException("--json and --quiet cannot be combined (--json already prints only results.json)");
         string outDir = OutputFolder(designPath, args.Values("out"));
 
         var loaded = DesignInput.Load(designPath, overrides, stderr);
@@ -57,7 +65,7 @@ internal sealed class SolveCommand : ICommand
         SolveOutcome outcome;
         try
         {
-            outcome = SolvePipeline.Run(loaded.Design, accuracy, budget);
+            outcome = SolvePipeline.Run(loaded.Design, accuracy, budget, cancellationToken: token);
         }
         catch (MeshInputException e)
         {
@@ -80,10 +88,13 @@ internal sealed class SolveCommand : ICommand
             return ExitCodes.SolverFailure;
         }
 
+        // Last point to stop: once writing starts, every file is written, so a run leaves all of its files or none.
+        token.ThrowIfCancellationRequested();
+        string resultsJson = ResultsJsonWriter.Write(outcome, designPath);
         try
         {
             Directory.CreateDirectory(outDir);
-            AtomicFile.WriteAllText(Path.Combine(outDir, "results.json"), ResultsJsonWriter.Write(outcome, designPath));
+            AtomicFile.WriteAllText(Path.Combine(outDir, "results.json"), resultsJson);
             AtomicFile.WriteAllText(Path.Combine(outDir, "hotspots.csv"), ResultsCsvWriter.HotSpots(outcome));
             AtomicFile.WriteAllText(Path.Combine(outDir, "convergence.csv"), ResultsCsvWriter.Convergence(outcome));
             foreach (var profile in outcome.Analysis.SurfaceProfiles)
@@ -95,7 +106,8 @@ internal sealed class SolveCommand : ICommand
             return ExitCodes.InputError;
         }
 
-        SolveSummary.Write(outcome, designPath, outDir, stdout);
+        if (json) stdout.Write(resultsJson);
+        else if (!quiet) SolveSummary.Write(outcome, designPath, outDir, stdout);
         return outcome.Analysis.Verdict == CheckVerdict.Fail ? ExitCodes.ChecksFailed : ExitCodes.Ok;
     }
 
