@@ -50,6 +50,15 @@ public class SolveCommandTests
             Assert.Contains("results.json", files);
             Assert.Contains("hotspots.csv", files);
             Assert.Contains("convergence.csv", files);
+            // The pictures and the self-contained report are part of every solve (issue: solve writes them all).
+            Assert.Contains("report.html", files);
+            Assert.Contains("field-map.png", files);
+            Assert.Contains("field-map.svg", files);
+            Assert.Contains(files, f => f!.StartsWith("hot-spot-1", StringComparison.Ordinal));
+            Assert.Contains(files, f => f!.StartsWith("surface-field-", StringComparison.Ordinal) && f.EndsWith(".png", StringComparison.Ordinal));
+            string html = await File.ReadAllTextAsync(Path.Combine(outDir, "report.html"));
+            Assert.DoesNotContain("http://", html, StringComparison.Ordinal);
+            Assert.DoesNotContain("https://", html, StringComparison.Ordinal);
 
             string json = await File.ReadAllTextAsync(Path.Combine(outDir, "results.json"));
             var schema = await JsonSchema.FromFileAsync(SchemaPath);

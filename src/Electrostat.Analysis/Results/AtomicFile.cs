@@ -11,14 +11,23 @@ public static class AtomicFile
     /// <param name="text">Content.</param>
     public static void WriteAllText(string path, string text)
     {
-        ArgumentNullException.ThrowIfNull(path);
         ArgumentNullException.ThrowIfNull(text);
+        WriteAllBytes(path, new UTF8Encoding(false).GetBytes(text));
+    }
+
+    /// <summary>Writes <paramref name="bytes"/> to <paramref name="path"/> atomically.</summary>
+    /// <param name="path">Target path.</param>
+    /// <param name="bytes">Content.</param>
+    public static void WriteAllBytes(string path, byte[] bytes)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        ArgumentNullException.ThrowIfNull(bytes);
         string full = Path.GetFullPath(path);
         string dir = Path.GetDirectoryName(full) ?? ".";
         string temp = Path.Combine(dir, "." + Path.GetFileName(full) + "." + Guid.NewGuid().ToString("N")[..8] + ".tmp");
         try
         {
-            File.WriteAllText(temp, text, new UTF8Encoding(false));
+            File.WriteAllBytes(temp, bytes);
             File.Move(temp, full, overwrite: true);
         }
         finally

@@ -6,6 +6,7 @@ using Electrostat.Fem.Assembly;
 using Electrostat.Fem.Problem;
 using Electrostat.Meshing;
 using Electrostat.Meshing.Input;
+using Electrostat.Rendering.Report;
 
 namespace Electrostat.Cli.Commands;
 
@@ -31,6 +32,10 @@ internal sealed class SolveCommand : ICancellableCommand
           hotspots.csv                 the hot spots, highest first
           convergence.csv              the adaptive history (peaks, capacitances, time per level)
           surface-field-NAME.csv       |E|, normal field and surface charge along each conductor
+          report.html                  self-contained report (verdict, field map, tables, cautions)
+          field-map.png, field-map.svg |E| map with equipotentials and numbered hot spots
+          hot-spot-1..3.png            zoomed views of the three highest hot spots
+          surface-field-NAME.png       |E| along each conductor against its breakdown and margin lines
         Every file is written atomically (temporary file, then rename).
         options:
           --out DIR            output folder (created if missing)
@@ -99,6 +104,7 @@ internal sealed class SolveCommand : ICancellableCommand
             AtomicFile.WriteAllText(Path.Combine(outDir, "convergence.csv"), ResultsCsvWriter.Convergence(outcome));
             foreach (var profile in outcome.Analysis.SurfaceProfiles)
                 AtomicFile.WriteAllText(Path.Combine(outDir, ResultsJsonWriter.SurfaceFileName(profile.ConductorName)), profile.ToCsv());
+            ReportWriter.Write(outDir, ReportInput.FromOutcome(outcome));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {

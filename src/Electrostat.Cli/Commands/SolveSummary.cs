@@ -59,6 +59,7 @@ internal static class SolveSummary
         }
         foreach (var s in o.Warnings.Concat(an.Warnings)) w.WriteLine("warning: " + s);
         w.WriteLine($"results    {outDir}{Path.DirectorySeparatorChar}results.json (+ hotspots.csv, convergence.csv, surface-field-*.csv)");
+        w.WriteLine($"report     {outDir}{Path.DirectorySeparatorChar}report.html (+ field-map.png/.svg, hot-spot-*.png, surface-field-*.png)");
         w.WriteLine("caution    " + ResultsJsonWriter.Caution);
     }
 

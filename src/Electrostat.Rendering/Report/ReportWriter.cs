@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using Electrostat.Analysis;
 using Electrostat.Analysis.HotSpots;
+using Electrostat.Analysis.Results;
 using Electrostat.Fem.Problem;
 using Electrostat.Rendering.Charts;
 using Electrostat.Rendering.Drawing;
@@ -11,7 +12,8 @@ namespace Electrostat.Rendering.Report;
 
 /// <summary>
 /// Writes the figures of a solved design and the self-contained report.html (images inlined as data URIs, no
-/// network resources, print-friendly) into an output folder.
+/// network resources, print-friendly) into an output folder. Every file is written atomically (temporary file in
+/// the same folder, then rename).
 /// </summary>
 /// <remarks>
 /// Files: <c>field-map.png</c>, <c>field-map.svg</c>, <c>hot-spot-1.png</c> … (zoomed insets),
@@ -34,29 +36,29 @@ public static class ReportWriter
         var figures = ReportFigures.Render(input, options);
 
         string mapPng = Path.Combine(folder, "field-map.png");
-        File.WriteAllBytes(mapPng, figures.MapPng);
+        AtomicFile.WriteAllBytes(mapPng, figures.MapPng);
         string? mapSvg = null;
         if (options.WriteSvg)
         {
             mapSvg = Path.Combine(folder, "field-map.svg");
-            File.WriteAllText(mapSvg, figures.Map.Svg());
+            AtomicFile.WriteAllText(mapSvg, figures.Map.Svg());
         }
         var insets = new List<string>();
         foreach (var (rank, png) in figures.Insets)
         {
             string p = Path.Combine(folder, string.Create(CultureInfo.InvariantCulture, $"hot-spot-{rank}.png"));
-            File.WriteAllBytes(p, png);
+            AtomicFile.WriteAllBytes(p, png);
             insets.Add(p);
         }
         var plots = new List<string>();
         foreach (var (name, png) in figures.SurfacePlots)
         {
             string p = Path.Combine(folder, "surface-field-" + SafeFileName(name) + ".png");
-            File.WriteAllBytes(p, png);
+            AtomicFile.WriteAllBytes(p, png);
             plots.Add(p);
         }
         string html = Path.Combine(folder, "report.html");
-        File.WriteAllText(html, BuildHtml(input, figures), new UTF8Encoding(false));
+        AtomicFile.WriteAllText(html, BuildHtml(input, figures));
         return new ReportFiles(html, mapPng, mapSvg, insets, plots);
     }
 
