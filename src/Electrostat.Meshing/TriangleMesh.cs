@@ -72,4 +72,36 @@ public sealed class TriangleMesh
 
     /// <summary>Number of constrained edges.</summary>
     public int SegmentCount => SegmentTag.Length;
+
+    /// <summary>
+    /// Finds a triangle containing the point (x, y) and its barycentric coordinates there, by a linear scan
+    /// (O(triangles): meant for a few probes, not for bulk interpolation). Points on a shared edge go to the
+    /// first triangle found; a tolerance of 1e-12 in barycentric terms admits points on the boundary.
+    /// </summary>
+    /// <param name="x">x (or r), metres.</param>
+    /// <param name="y">y (or z), metres.</param>
+    /// <param name="triangle">The triangle found, or -1.</param>
+    /// <param name="l0">Barycentric weight of the triangle's first vertex.</param>
+    /// <param name="l1">Barycentric weight of the second vertex.</param>
+    /// <param name="l2">Barycentric weight of the third vertex.</param>
+    /// <returns>True when the point lies in the mesh.</returns>
+    public bool TryLocate(double x, double y, out int triangle, out double l0, out double l1, out double l2)
+    {
+        const double tolerance = -1e-12;
+        for (int t = 0; t < TriangleCount; t++)
+        {
+            int a = Triangles[3 * t], b = Triangles[3 * t + 1], c = Triangles[3 * t + 2];
+            double x0 = X[a], y0 = Y[a];
+            double d = (X[b] - x0) * (Y[c] - y0) - (X[c] - x0) * (Y[b] - y0);
+            if (d == 0) continue;
+            double w1 = ((x - x0) * (Y[c] - y0) - (X[c] - x0) * (y - y0)) / d;
+            double w2 = ((X[b] - x0) * (y - y0) - (x - x0) * (Y[b] - y0)) / d;
+            double w0 = 1 - w1 - w2;
+            if (w0 < tolerance || w1 < tolerance || w2 < tolerance) continue;
+            (triangle, l0, l1, l2) = (t, w0, w1, w2);
+            return true;
+        }
+        (triangle, l0, l1, l2) = (-1, 0, 0, 0);
+        return false;
+    }
 }

@@ -111,26 +111,11 @@ public sealed class RecoveredField
     public bool TryEvaluate(double x, double y, out double fieldX, out double fieldY, out int triangle)
     {
         fieldX = fieldY = 0;
-        triangle = -1;
-        var m = Mesh;
-        var tri = m.Triangles;
-        for (int t = 0; t < m.TriangleCount; t++)
-        {
-            int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
-            double x0 = m.X[a], y0 = m.Y[a];
-            double d = (m.X[b] - x0) * (m.Y[c] - y0) - (m.X[c] - x0) * (m.Y[b] - y0);
-            if (d == 0) continue;
-            double l1 = ((x - x0) * (m.Y[c] - y0) - (m.X[c] - x0) * (y - y0)) / d;
-            double l2 = ((m.X[b] - x0) * (y - y0) - (x - x0) * (m.Y[b] - y0)) / d;
-            double l0 = 1 - l1 - l2;
-            const double tol = -1e-12;
-            if (l0 < tol || l1 < tol || l2 < tol) continue;
-            int s0 = CornerSide[3 * t], s1 = CornerSide[3 * t + 1], s2 = CornerSide[3 * t + 2];
-            fieldX = l0 * SideFieldXVoltsPerMetre[s0] + l1 * SideFieldXVoltsPerMetre[s1] + l2 * SideFieldXVoltsPerMetre[s2];
-            fieldY = l0 * SideFieldYVoltsPerMetre[s0] + l1 * SideFieldYVoltsPerMetre[s1] + l2 * SideFieldYVoltsPerMetre[s2];
-            triangle = t;
-            return true;
-        }
-        return false;
+        if (!Mesh.TryLocate(x, y, out triangle, out double l0, out double l1, out double l2)) return false;
+        int t = triangle;
+        int s0 = CornerSide[3 * t], s1 = CornerSide[3 * t + 1], s2 = CornerSide[3 * t + 2];
+        fieldX = l0 * SideFieldXVoltsPerMetre[s0] + l1 * SideFieldXVoltsPerMetre[s1] + l2 * SideFieldXVoltsPerMetre[s2];
+        fieldY = l0 * SideFieldYVoltsPerMetre[s0] + l1 * SideFieldYVoltsPerMetre[s1] + l2 * SideFieldYVoltsPerMetre[s2];
+        return true;
     }
 }

@@ -69,20 +69,11 @@ public static class SolutionProbe
     {
         ArgumentNullException.ThrowIfNull(outcome);
         var sol = outcome.Adaptive.Solution;
-        var m = sol.Mesh;
-        var tri = m.Triangles;
-        for (int t = 0; t < m.TriangleCount; t++)
+        if (sol.Mesh.TryLocate(xMetres, yMetres, out int t, out double l0, out double l1, out double l2))
         {
-            int a = tri[3 * t], b = tri[3 * t + 1], c = tri[3 * t + 2];
-            double x0 = m.X[a], y0 = m.Y[a];
-            double d = (m.X[b] - x0) * (m.Y[c] - y0) - (m.X[c] - x0) * (m.Y[b] - y0);
-            if (d == 0) continue;
-            double l1 = ((xMetres - x0) * (m.Y[c] - y0) - (m.X[c] - x0) * (yMetres - y0)) / d;
-            double l2 = ((m.X[b] - x0) * (yMetres - y0) - (xMetres - x0) * (m.Y[b] - y0)) / d;
-            double l0 = 1 - l1 - l2;
-            if (l0 < -1e-12 || l1 < -1e-12 || l2 < -1e-12) continue;
+            var tri = sol.Mesh.Triangles;
             var p = sol.PotentialVolts;
-            return new ValidationMeasurement(l0 * p[a] + l1 * p[b] + l2 * p[c], double.NaN);
+            return new ValidationMeasurement(l0 * p[tri[3 * t]] + l1 * p[tri[3 * t + 1]] + l2 * p[tri[3 * t + 2]], double.NaN);
         }
         throw new InvalidOperationException($"The point ({xMetres}, {yMetres}) m is outside the mesh.");
     }
