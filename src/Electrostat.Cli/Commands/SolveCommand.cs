@@ -1,11 +1,13 @@
 using System.Globalization;
 using Electrostat.Analysis;
+using Electrostat.Analysis.Adaptivity;
 using Electrostat.Analysis.Pipeline;
 using Electrostat.Analysis.Results;
 using Electrostat.Fem.Assembly;
 using Electrostat.Fem.Problem;
 using Electrostat.Meshing;
 using Electrostat.Meshing.Input;
+using Electrostat.Numerics.Parallelism;
 using Electrostat.Rendering.Report;
 
 namespace Electrostat.Cli.Commands;
@@ -23,7 +25,7 @@ internal sealed class SolveCommand : ICancellableCommand
 
     public string Usage => """
         usage: electrostat solve DESIGN.json [--out DIR] [--set name=value]... [--accuracy coarse|normal|fine|TOL]
-                                             [--max-elements N] [--json | --quiet]
+                                             [--max-elements N] [--threads N] [--json | --quiet]
         Validates the design, meshes it, solves for the potential with adaptive refinement until the peak field
         per material and the capacitance matrix settle, then reports hot spots, margins, clearances, singular
         corners, energy and forces.
@@ -42,6 +44,7 @@ internal sealed class SolveCommand : ICancellableCommand
           --set name=value     override a parameter (repeatable), e.g. --set gap=12 or --set "v_hv=25 kV"
           --accuracy LEVEL     coarse (2 %), normal (0.5 %, default), fine (0.1 %), or a tolerance such as 0.01 or 1%
           --max-elements N     element budget of the adaptive loop (default by accuracy: 50k / 200k / 1M)
+          --threads N          use at most N threads in the solver kernels (default: all cores)
           --json               print results.json on stdout (nothing else on stdout; the files are still written)
           --quiet              no summary on stdout; the files and the exit code are unchanged
         Ctrl-C stops the run between adaptive levels; no result file is written (exit 130).
@@ -49,7 +52,12 @@ internal sealed class SolveCommand : ICancellableCommand
         130 cancelled.
         """;
 
-    public OptionSpec Options { get; } = new(["set", "out", "accuracy", "max-elements"], ["json", "quiet"], 1, 1);
+    public OptionSpec Options { get; } = new(["set", "out", "accuracy", "max-elements", "threads"], ["json", "quiet"], 1, 1);
+
+    private readonly bool? _interactive;
+
+    /// <summary>Creates the command; <paramref name="interactive"/> overrides the terminal check for progress lines.</summary>
+    public SolveCommand(bool? interactive = null) => _interactive = interactive;
 
     public int Run(ParsedArguments args, TextWriter stdout, TextWriter stderr) => Run(args, stdout, stderr, CancellationToken.None);
 
@@ -60,6 +68,7 @@ internal sealed class SolveCommand : ICancellableCommand
         var accuracy = ParseAccuracy(args.Values("accuracy"));
         int? budget = ParseBudget(args.Values("max-elements"));
         bool json = args.Has("json"), quiet = args.Has("quiet");
+        int? threads = ParseThreads(args.Values("threads"));
         if (json && quiet) throw new UsageException("--json and --quiet cannot be combined (--json already prints only results.json)");
         string outDir = OutputFolder(designPath, args.Values("out"));
 
@@ -70,7 +79,14 @@ internal sealed class SolveCommand : ICancellableCommand
         SolveOutcome outcome;
         try
         {
-            outcome = SolvePipeline.Run(loaded.Design, accuracy, budget, cancellationToken: token);
+            // Progress goes to stderr, only when a person is watching (never redirected, never with --json/--quiet).
+            bool showProgress = !json && !quiet && (_interactive ?? !Console.IsErrorRedirected);
+            Action<AdaptiveLevel>? progress = showProgress
+                ? level => stderr.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                    $"  level {level.Index}: {level.Triangles} triangles, {level.Iterations} CG iterations, {level.TotalSeconds:F2} s"))
+                : null;
+            using (threads is int n ? WorkerLimit.Scope(n) : null)
+                outcome = SolvePipeline.Run(loaded.Design, accuracy, budget, levelCompleted: progress, cancellationToken: token);
         }
         catch (MeshInputException e)
         {
@@ -126,6 +142,16 @@ internal sealed class SolveCommand : ICancellableCommand
             throw new UsageException("--out names the design file itself; choose a folder");
         if (File.Exists(dir)) throw new UsageException($"--out \"{dir}\" is an existing file; choose a folder");
         return dir;
+    }
+
+    /// <summary>The --threads value: a whole number of at least 1, or null when not given.</summary>
+    internal static int? ParseThreads(IReadOnlyList<string> values)
+    {
+        if (values.Count == 0) return null;
+        if (values.Count > 1) throw new UsageException("--threads given more than once");
+        if (!int.TryParse(values[0], NumberStyles.Integer, CultureInfo.InvariantCulture, out int n) || n < 1)
+            throw new UsageException($"--threads \"{values[0]}\" is not a whole number of at least 1, e.g. --threads 1");
+        return n;
     }
 
     internal static AccuracyLevel ParseAccuracy(IReadOnlyList<string> values)

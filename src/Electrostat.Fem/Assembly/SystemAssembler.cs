@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using Electrostat.Fem.Elements;
+using Electrostat.Numerics.Parallelism;
 using Electrostat.Numerics.Sparse;
 
 namespace Electrostat.Fem.Assembly;
@@ -214,7 +215,7 @@ internal static class SystemAssembler
     public static double Energy(CompiledProblem cp, double[] phi, double[]? fieldX = null, double[]? fieldY = null)
     {
         int n = cp.Mesh.TriangleCount;
-        int parts = n > 50_000 ? Environment.ProcessorCount : 1;
+        int parts = n > 50_000 ? WorkerLimit.Workers : 1;
         var sums = new double[parts];
         var tri = cp.Mesh.Triangles;
         var x = cp.Mesh.X;

@@ -9,6 +9,7 @@ internal static class ParallelPolicy
     /// <summary>Entries of work below which a kernel runs on the calling thread only.</summary>
     public const int MinimumParallelWork = 40_000;
 
-    /// <summary>Default number of workers: the machine's processor count, capped to keep chunks large.</summary>
-    public static int DefaultWorkers => Math.Clamp(Environment.ProcessorCount, 1, 16);
+    /// <summary>Default number of workers: the machine's processor count (or the caller's <see cref="WorkerLimit"/>),
+    /// capped to keep chunks large.</summary>
+    public static int DefaultWorkers => WorkerLimit.Workers;
 }
