@@ -14,7 +14,7 @@ internal sealed class CheckCommand : ICommand
     public string Summary => "validate a design file and summarise it (no solving)";
 
     public string Usage => """
-        usage: electrostat check DESIGN.json [--set name=value]...
+        usage: electrostat check DESIGN.json [--set name=value]... [--json | --quiet]
 
         Reads and validates the design, then prints its symmetry, units, parameters, materials, conductors,
         region areas, requested checks and any warnings. Exit code 0 when the design is valid, 2 when it has
@@ -23,16 +23,32 @@ internal sealed class CheckCommand : ICommand
         options:
           --set name=value   override a parameter (repeatable); the value is written as in the file,
                              e.g. --set gap=12 or --set "v_hv=25 kV"
+          --json             print {valid, problems (file, line, column, JSON path, fix), design summary in SI units}
+                             on stdout and nothing else; exit codes unchanged
+          --quiet            print nothing on stdout; problems still go to stderr, exit codes unchanged
+
+        examples:
+          electrostat check geometries/hv-electrode-over-plate.json
+          electrostat check my-design.json --set gap=8 --json
         """;
 
-    public OptionSpec Options { get; } = new(["set"], [], 1, 1);
+    public OptionSpec Options { get; } = new(["set"], ["json", "quiet"], 1, 1);
 
     public int Run(ParsedArguments args, TextWriter stdout, TextWriter stderr)
     {
         var overrides = DesignInput.ParseOverrides(args.Values("set"));
+        bool json = args.Has("json"), quiet = args.Has("quiet");
+        if (json && quiet) throw new UsageException("--json and --quiet cannot be combined");
+        if (json)
+        {
+            // Machine-readable: the verdict, every problem with its location and the summary, on stdout only.
+            var loaded = DesignLoader.Load(args.Positionals[0], overrides);
+            stdout.Write(CheckJson.Write(loaded));
+            return loaded.Design is null ? ExitCodes.InputError : ExitCodes.Ok;
+        }
         var result = DesignInput.Load(args.Positionals[0], overrides, stderr);
         if (result.Design is null) return ExitCodes.InputError;
-        WriteSummary(result.Design, args.Positionals[0], result.Remarks.ToList(), stdout);
+        if (!quiet) WriteSummary(result.Design, args.Positionals[0], result.Remarks.ToList(), stdout);
         return ExitCodes.Ok;
     }
 

@@ -1,0 +1,48 @@
+using Newtonsoft.Json.Linq;
+
+namespace Electrostat.Cli.Tests;
+
+public class CheckJsonTests
+{
+    [Fact]
+    public void Json_ValidExample_ReportsValidAndTheSummaryInSiUnits()
+    {
+        string design = Path.Combine(RepoPaths.Geometries, "hv-electrode-over-plate.json");
+        var (exit, stdout, _) = CliRun.Run("check", design, "--json");
+        Assert.Equal(0, exit);
+        var root = JObject.Parse(stdout); // nothing but JSON on stdout
+        Assert.True((bool)root["valid"]!);
+        Assert.Equal("planar", (string?)root["design"]!["symmetry"]);
+        Assert.Contains(root["design"]!["conductors"]!, c => (string?)c["name"] == "hv_bar");
+    }
+
+    [Fact]
+    public void Json_InvalidDesign_ExitsTwo_AndLocatesEveryProblem()
+    {
+        string path = Path.Combine(Path.GetTempPath(), "electrostat-check-json-" + Guid.NewGuid().ToString("N") + ".json");
+        File.WriteAllText(path, "{\n  \"units\": \"mm\",\n  \"symetry\": \"planar\"\n}\n");
+        try
+        {
+            var (exit, stdout, _) = CliRun.Run("check", path, "--json");
+            Assert.Equal(2, exit);
+            var root = JObject.Parse(stdout);
+            Assert.False((bool)root["valid"]!);
+            var typo = root["problems"]!.First(p => ((string?)p["message"] ?? "").Contains("symetry", StringComparison.Ordinal));
+            Assert.Equal(3, (int)typo["line"]!);
+            Assert.True((int)typo["column"]! > 0);
+            Assert.Null(root["design"]);
+        }
+        finally
+        {
+            File.Delete(path);
+        }
+    }
+
+    [Fact]
+    public void Quiet_ValidExample_PrintsNothing()
+    {
+        var (exit, stdout, _) = CliRun.Run("check", Path.Combine(RepoPaths.Geometries, "capacitive-sensor-pcb.json"), "--quiet");
+        Assert.Equal(0, exit);
+        Assert.Equal("", stdout);
+    }
+}
