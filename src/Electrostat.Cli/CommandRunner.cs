@@ -68,7 +68,9 @@ internal static class CommandRunner
 #pragma warning restore CA1031
         {
             stderr.WriteLine($"electrostat {command.Name}: internal error ({e.GetType().Name}: {e.Message}).");
-            stderr.WriteLine("This is a bug in electrostat, not in your design; please report it with the design file.");
+            stderr.WriteLine("This is a bug in electrostat, not in your design; please report it with the design file"
+                + " (set ELECTROSTAT_TRACE=1 to add the program's trace to the report).");
+            if (Environment.GetEnvironmentVariable("ELECTROSTAT_TRACE") == "1") stderr.WriteLine(e.ToString());
             return ExitCodes.InternalError;
         }
     }

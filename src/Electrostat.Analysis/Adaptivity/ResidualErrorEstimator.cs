@@ -15,8 +15,10 @@ namespace Electrostat.Analysis.Adaptivity;
 /// sides, which keeps the indicator an upper-bound-type quantity in both materials. The ½ shares an interior edge
 /// between its two triangles; boundary edges count fully.</para>
 /// <para>Axisymmetric problems weight each edge and element integral by 2πr (r at the midpoint or centroid), the
-/// measure of the energy norm in the meridian plane. Triangles of a Kelvin exterior region get 0 (their error does
-/// not map to the physical domain simply; refinement there is not needed for the closed enclosures this loop serves).
+/// measure of the energy norm in the meridian plane. Triangles of a Kelvin image region (open space) are estimated
+/// like the rest, because the map keeps the energy: planar images have the same ε; axisymmetric images carry
+/// ε·R²/ρ'², so their edge terms are weighed by R²/ρ'² at the edge midpoint. The element residual ∇ε'·∇φ_h of the
+/// varying image permittivity is left out, like the 1/r term of the axisymmetric operator elsewhere.
 /// Only relative values matter for marking; <see cref="Estimate"/> also returns the global estimate η = (Σ η_T²)^½.</para>
 /// </remarks>
 public static class ResidualErrorEstimator
@@ -58,10 +60,20 @@ public static class ResidualErrorEstimator
         }
         var natural = new HashSet<int>(problem.Boundaries.Where(b => b.Value is NaturalBoundary).Select(b => b.Key));
 
+        // The axisymmetric Kelvin image carries ε·R²/ρ'² (see KelvinOpenBoundary): its flux jumps are weighed with that
+        // factor at the edge midpoint, continuous across the edge; the planar image keeps ε (conformal invariance).
+        var kelvin = problem.OpenBoundary;
+        bool scaleImage = kelvin is not null && axi;
+        double KelvinFactor(double px, double py)
+        {
+            double dx = px - kelvin!.ExteriorCentreX, dy = py - kelvin.ExteriorCentreY;
+            return kelvin.RadiusMetres * kelvin.RadiusMetres / Math.Max(dx * dx + dy * dy, 1e-30 * kelvin.RadiusMetres * kelvin.RadiusMetres);
+        }
+
         Array.Clear(etaSquared);
         for (int t = 0; t < nt; t++)
         {
-            if (reg[t] == kelvinRegion) continue;
+            bool image = reg[t] == kelvinRegion;
             var et = tensor[reg[t]];
             double epsT = eps0 * Math.Max(et.Xx, et.Yy);
             int a = tv[3 * t], b = tv[3 * t + 1], c = tv[3 * t + 2];
@@ -85,6 +97,8 @@ public static class ResidualErrorEstimator
                 // Outward unit normal of t: the counter-clockwise edge direction turned clockwise.
                 double nx = ty / len, ny = -tx / len;
                 double w = axi ? Math.PI * (x[p] + x[q]) : 1; // 2π·r at the midpoint
+                // In the image, D and the energy weight both scale with the Kelvin factor k: η² ∝ (k·jump)²/(k·ε).
+                if (image && scaleImage) w *= KelvinFactor(0.5 * (x[p] + x[q]), 0.5 * (y[p] + y[q]));
                 if (nb < 0)
                 {
                     if (!natural.Contains(edges.Tag[code])) continue;
@@ -93,7 +107,6 @@ public static class ResidualErrorEstimator
                     continue;
                 }
                 int u = nb / 3;
-                if (reg[u] == kelvinRegion) continue;
                 var eu = tensor[reg[u]];
                 double dxU = eps0 * (eu.Xx * ex[u] + eu.Xy * ey[u]);
                 double dyU = eps0 * (eu.Xy * ex[u] + eu.Yy * ey[u]);

@@ -72,6 +72,8 @@ public static class HotSpotFinder
             }
             if (accepted.Count >= options.Count) continue; // keep counting merges into the listed ones
             double gap = LocalGap(outlines, new Point2(x, y));
+            // No outline at another potential (a lone conductor in open space): the design's size stands in, as for corners.
+            if (!double.IsFinite(gap)) gap = context.Design.Bounds.Diagonal;
             double radius = Math.Max(options.MeshSizeFactor * topo.LocalSizeMetres[c.Vertex], options.GapFraction * gap);
             accepted.Add((c.Side, c.Vertex, c.Field, radius, 1));
         }

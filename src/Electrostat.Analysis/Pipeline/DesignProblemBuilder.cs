@@ -11,7 +11,9 @@ namespace Electrostat.Analysis.Pipeline;
 /// <summary>
 /// Turns a design and a mesh of it into an <see cref="ElectrostaticProblem"/>: one terminal per electrode (touching
 /// conductors that share a potential are one terminal), the enclosure at its potential, symmetry planes, the axis
-/// and material interfaces natural, and one material per region attribute.
+/// and material interfaces natural, and one material per region attribute. A design in open space gets the Kelvin
+/// open boundary of its image disc (<see cref="OpenSpaceImage"/>), with the potential at infinity equal to the
+/// enclosure potential (axisymmetric; planar leaves it free).
 /// </summary>
 /// <remarks>
 /// An electrode that touches the enclosure is part of the enclosure (held at its potential, not a terminal). An
@@ -48,6 +50,8 @@ public static class DesignProblemBuilder
         var enclosure = new EnclosureBoundary(design.Enclosure.PotentialVolts);
         foreach (var t in input.Tags.Tags)
         {
+            // The open-space circles get no role: the Kelvin map joins them (see KelvinOpenBoundary).
+            if (t.Kind is BoundaryKind.OpenBoundary or BoundaryKind.OpenBoundaryImage) continue;
             boundaries[t.Tag] = t.Kind switch
             {
                 BoundaryKind.Conductor => terminalOf[t.ElectrodeIndex] >= 0 ? new ConductorBoundary(terminalOf[t.ElectrodeIndex]) : enclosure,
@@ -57,6 +61,13 @@ public static class DesignProblemBuilder
         }
         var materials = new Dictionary<int, FemMaterial>();
         foreach (var r in input.Regions) materials[r.Attribute] = FemMaterial.Dielectric(r.Material.RelativePermittivity);
+        KelvinOpenBoundary? open = null;
+        if (input.OpenSpace is { } o)
+        {
+            materials[o.ImageRegion] = FemMaterial.Dielectric(o.Material.RelativePermittivity);
+            open = new KelvinOpenBoundary(o.InteriorTag, o.ImageTag, o.ImageRegion, o.RadiusMetres, o.CenterX, o.CenterY,
+                o.ImageCenterX, o.ImageCenterY, design.Enclosure.PotentialVolts);
+        }
         var problem = new ElectrostaticProblem
         {
             Mesh = mesh,
@@ -65,6 +76,7 @@ public static class DesignProblemBuilder
             Materials = materials,
             Conductors = conductors,
             Boundaries = boundaries,
+            OpenBoundary = open,
         };
         return new BuiltProblem(problem, terminalElectrodes, input.Regions, input.Tags);
     }

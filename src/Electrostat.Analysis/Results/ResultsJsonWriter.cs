@@ -58,6 +58,8 @@ public static class ResultsJsonWriter
         w.WriteString("title", d.Title);
         w.WriteString("symmetry", planar ? "planar" : "axisymmetric");
         Num(w, "depth_m", planar ? d.DepthMetres : null);
+        w.WriteString("outer_boundary", d.Enclosure.IsOpen ? "open" : "enclosure");
+        Num(w, "open_radius_m", d.Enclosure.Open?.RadiusMetres);
         w.WriteEndObject();
 
         w.WriteString("verdict", Verdict(an.Verdict));

@@ -64,6 +64,16 @@ public static class ReferenceFormulas
         return Eps0 * widthMetres / s;
     }
 
+    /// <summary>Isolated sphere in open space: C = 4πε0 a, F (Griffiths, Introduction to Electrodynamics, ch. 2; the
+    /// b → ∞ limit of <see cref="ConcentricSpheresCapacitance"/>).</summary>
+    /// <param name="radiusMetres">a, metres.</param>
+    public static double IsolatedSphereCapacitance(double radiusMetres) => 4 * Math.PI * Eps0 * radiusMetres;
+
+    /// <summary>Isolated sphere at V with infinity at 0: |E| = V/a on its surface, V/m (same source).</summary>
+    /// <param name="radiusMetres">a, metres.</param>
+    /// <param name="voltageVolts">Sphere potential, volts.</param>
+    public static double IsolatedSpherePeakField(double radiusMetres, double voltageVolts) => voltageVolts / radiusMetres;
+
     /// <summary>Concentric spheres: C = 4πε0 ab/(b − a), F (Griffiths, Introduction to Electrodynamics, ch. 2).</summary>
     /// <param name="innerRadiusMetres">a, metres.</param>
     /// <param name="outerRadiusMetres">b, metres.</param>

@@ -19,6 +19,17 @@ public static class SolutionProbe
         return new ValidationMeasurement(cap.Maxwell[i, j], est);
     }
 
+    /// <summary>Mutual capacitance −C_ij between two named terminals (F/m planar, F axisymmetric) and its estimate; in
+    /// planar open space (row sums zero) this is the line capacitance of a two-conductor line.</summary>
+    /// <param name="outcome">A solve outcome.</param>
+    /// <param name="first">Terminal name.</param>
+    /// <param name="second">Another terminal name.</param>
+    public static ValidationMeasurement Mutual(SolveOutcome outcome, string first, string second)
+    {
+        var m = Maxwell(outcome, first, second);
+        return m with { Value = -m.Value };
+    }
+
     /// <summary>
     /// Line capacitance of a two-conductor line carrying equal and opposite charges, from the 2×2 Maxwell matrix:
     /// (C11 C22 − C12²) / (C11 + C22 + 2 C12). The estimate is the largest of the three entries' estimates.

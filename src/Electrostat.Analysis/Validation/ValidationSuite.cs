@@ -63,6 +63,15 @@ public static class ValidationSuite
             new("Concentric spheres: peak |E| at r = a", griffithsCh2, ["concentric-spheres.json"],
                 ReferenceFormulas.ConcentricSpheresPeakField(5 * Mm, 20 * Mm, 1), "V/m", 1, 0.01, peakTol, true,
                 o => SolutionProbe.PeakField(o[0])),
+            new("Isolated sphere in open space (axisymmetric, Kelvin open boundary): C", griffithsCh2, ["isolated-sphere.json"],
+                ReferenceFormulas.IsolatedSphereCapacitance(10 * Mm), "pF", 1e12, 0.005, capTol, true,
+                o => SolutionProbe.Maxwell(o[0], "sphere", "sphere")),
+            new("Isolated sphere: peak |E| at r = a", griffithsCh2, ["isolated-sphere.json"],
+                ReferenceFormulas.IsolatedSpherePeakField(10 * Mm, 1), "V/m", 1, 0.01, peakTol, true,
+                o => SolutionProbe.PeakField(o[0])),
+            new("Two-wire line d/a = 10 in open space (planar, Kelvin open boundary): C'", rwv, ["two-wire-open.json"],
+                ReferenceFormulas.TwoWireCapacitancePerMetre(1 * Mm, 10 * Mm), "pF/m", 1e12, 0.005, capTol, true,
+                o => SolutionProbe.Mutual(o[0], "left", "right")),
         };
         const double trough = 100 * Mm;
         foreach (var (x, y) in new[] { (0.5, 0.5), (0.25, 0.5), (0.5, 0.25), (0.5, 0.75), (0.75, 0.75) })

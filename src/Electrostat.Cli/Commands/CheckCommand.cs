@@ -109,7 +109,15 @@ internal sealed class CheckCommand : ICommand
             markers.TryGetValue(BoundaryMarker.SymmetryPlane, out int sp) ? $", {sp} symmetry-plane edge(s)" : "",
             markers.TryGetValue(BoundaryMarker.Axis, out int ax) ? $", {ax} axis edge(s)" : "",
         });
-        w.WriteLine($"enclosure  {(d.Enclosure.IsShorthandBox ? "box" : "outline")} {Len(b.Width)} x {Len(b.Height)} at {Pot(d.Enclosure.PotentialVolts)}{extra}");
+        if (d.Enclosure.Open is { } open)
+        {
+            w.WriteLine($"enclosure  open space: truncation circle of radius {Len(open.RadiusMetres)} about ({string.Create(c, $"{open.Center.X / d.Units.Metres:G6}, {open.Center.Y / d.Units.Metres:G6}")}) {d.Units.Symbol}, "
+                + (d.Symmetry == Symmetry.Axisymmetric ? $"infinity at {Pot(d.Enclosure.PotentialVolts)}" : "infinity free (charges sum to zero)"));
+        }
+        else
+        {
+            w.WriteLine($"enclosure  {(d.Enclosure.IsShorthandBox ? "box" : "outline")} {Len(b.Width)} x {Len(b.Height)} at {Pot(d.Enclosure.PotentialVolts)}{extra}");
+        }
         w.WriteLine($"regions    domain {Area(d.Regions.DomainAreaSquareMetres)}, background {Area(d.Regions.BackgroundAreaSquareMetres)}");
 
         var ch = d.Checks;

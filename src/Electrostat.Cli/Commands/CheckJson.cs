@@ -66,5 +66,8 @@ internal static class CheckJson
         })),
         ["dielectrics"] = new JArray(d.Dielectrics.Select(x => new JObject { ["name"] = x.Name, ["material"] = x.MaterialName })),
         ["enclosure_potential_V"] = d.Enclosure.PotentialVolts,
+        ["open_space"] = d.Enclosure.Open is { } open
+            ? new JObject { ["radius_m"] = open.RadiusMetres, ["center_m"] = new JArray(open.Center.X, open.Center.Y) }
+            : null,
     };
 }

@@ -17,7 +17,7 @@ namespace Electrostat.Geometry.Loading;
 /// </summary>
 internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
 {
-    private static readonly string[] EnclosureKeys = ["shape", "margin", "potential", "symmetry_planes"];
+    private static readonly string[] EnclosureKeys = ["shape", "margin", "potential", "symmetry_planes", "open", "radius", "center"];
     private static readonly string[] PlaneKeys = ["x", "y"];
 
     private ProblemSink Sink => ctx.Sink;
@@ -48,6 +48,13 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
                 if (ctx.Quantity(prop.Value, QuantityKind.Length, $"symmetry plane {prop.Name}") is double v)
                     planes.Add((prop.Name == "x", v, po));
             }
+        }
+        bool open = obj["open"] is { } openToken && (ctx.Bool(openToken, "open") ?? false);
+        if (open) return BuildOpen(obj, potential, planes.Count > 0 ? planes[0].Token : null, conductors, dielectrics);
+        foreach (string key in (ReadOnlySpan<string>)["radius", "center"])
+        {
+            if (obj[key] is not null)
+                Sink.Error(obj.Property(key), $"\"{key}\" belongs to an open enclosure", "add \"open\": true for a design in open space, or remove it");
         }
         Shape? shape;
         bool shorthand = false;
@@ -135,6 +142,103 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         return new Enclosure(marked, potential, shorthand);
     }
 
+    /// <summary>
+    /// The truncation circle of a design in open space: a full circle (planar) or a half disc on the axis
+    /// (axisymmetric), sized by "radius" or by "margin" around the bodies, centred on "center" or on the bodies.
+    /// </summary>
+    private Enclosure? BuildOpen(JObject obj, double potential, JToken? planeToken, List<BodyDraft> conductors, List<BodyDraft> dielectrics)
+    {
+        bool axisymmetric = ctx.Symmetry == Symmetry.Axisymmetric;
+        bool ok = true;
+        if (planeToken is not null)
+        {
+            Sink.Error(planeToken, "symmetry planes cannot be combined with an open enclosure",
+                "model the whole cross-section in open space (an axisymmetric design needs no plane on the axis), or use a closed enclosure");
+            ok = false;
+        }
+        if (obj["shape"] is not null)
+        {
+            Sink.Error(obj.Property("shape"), "an open enclosure is a circle set by \"radius\" or \"margin\", not by \"shape\"",
+                "remove \"shape\", or remove \"open\" for a closed enclosure of that outline");
+            ok = false;
+        }
+        if (!axisymmetric && obj["potential"] is not null)
+        {
+            Sink.Error(obj.Property("potential"), "a planar design in open space has no fixed potential at infinity (the conductors' charges sum to zero)",
+                "remove \"potential\"; fix the potentials on the conductors instead");
+            ok = false;
+        }
+        var marginToken = obj["margin"];
+        var radiusToken = obj["radius"];
+        if (marginToken is not null && radiusToken is not null)
+        {
+            Sink.Error(obj, "the open enclosure has both \"radius\" and \"margin\"", "keep one: \"margin\" sizes the circle around the bodies, \"radius\" gives it outright");
+            return null;
+        }
+        if (marginToken is null && radiusToken is null)
+        {
+            Sink.Error(obj, "the open enclosure needs \"margin\" or \"radius\" to size its truncation circle",
+                "add e.g. \"margin\": 10 (the circle clears every body by that much); a margin of half the design's size is plenty");
+            return null;
+        }
+        var box = BoundingBox.Empty;
+        foreach (var b in conductors.Concat(dielectrics)) box = box.Union(b.Shape.Bounds);
+        if (box.IsEmpty)
+        {
+            if (!Sink.HasErrors)
+                Sink.Error(obj, "an open enclosure needs at least one body to surround", "add conductors");
+            return null;
+        }
+        Point2 center = new((box.MinX + box.MaxX) / 2, (box.MinY + box.MaxY) / 2);
+        if (obj["center"] is { } centerToken)
+        {
+            if (ctx.Point(centerToken, "center") is not Point2 c) return null;
+            center = c;
+        }
+        if (axisymmetric)
+        {
+            if (obj["center"] is { } ct && Math.Abs(center.X) > 1e-12 * Math.Max(box.Diagonal, 1e-300))
+            {
+                Sink.Error(ct, "the centre of an axisymmetric open enclosure must lie on the axis (x = 0)", "write \"center\": [0, z]");
+                return null;
+            }
+            center = new Point2(0, center.Y);
+        }
+        double radius;
+        if (marginToken is not null)
+        {
+            double? margin = ctx.Quantity(marginToken, QuantityKind.Length, "margin", positive: true);
+            if (margin is null) return null;
+            double reach = 0;
+            foreach (var (x, y) in new[] { (box.MinX, box.MinY), (box.MinX, box.MaxY), (box.MaxX, box.MinY), (box.MaxX, box.MaxY) })
+                reach = Math.Max(reach, Math.Sqrt((x - center.X) * (x - center.X) + (y - center.Y) * (y - center.Y)));
+            radius = reach + margin.Value;
+        }
+        else
+        {
+            double? r = ctx.Quantity(radiusToken, QuantityKind.Length, "radius", positive: true);
+            if (r is null) return null;
+            radius = r.Value;
+        }
+        if (!ok) return null;
+        Contour outline;
+        if (axisymmetric)
+        {
+            var bottom = new Point2(0, center.Y - radius);
+            var top = new Point2(0, center.Y + radius);
+            outline = new Contour([new ArcSegment(center, radius, -Math.PI / 2, Math.PI, bottom, top), new Shapes.LineSegment(top, bottom)])
+                .WithMarkers(s => s is ArcSegment ? BoundaryMarker.OpenBoundary : BoundaryMarker.Axis);
+        }
+        else
+        {
+            outline = ShapeFactory.Circle(center, radius).WithMarkers(_ => BoundaryMarker.OpenBoundary);
+        }
+        double size = 2 * radius;
+        _chord = 1e-7 * size;
+        _touch = 1e-6 * size;
+        return new Enclosure(new Shape(outline), axisymmetric ? potential : 0, marginToken is not null, new OpenSpace(center, radius));
+    }
+
     public List<Electrode>? Validate(Enclosure enclosure, List<BodyDraft> conductors, List<BodyDraft> dielectrics)
     {
         bool earlierErrors = Sink.HasErrors; // then some bodies may be missing: skip whole-design judgements
@@ -169,6 +273,21 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
             }
         }
         if (!ok) return null;
+
+        // An open enclosure's circle is not a wall: every body must lie strictly inside it.
+        if (enclosure.Open is { } openSpace)
+        {
+            foreach (var (b, kind) in all)
+            {
+                var far = polys[b].Coordinates.MaxBy(c => Math.Sqrt((c.X - openSpace.Center.X) * (c.X - openSpace.Center.X) + (c.Y - openSpace.Center.Y) * (c.Y - openSpace.Center.Y)))!;
+                double reach = Math.Sqrt((far.X - openSpace.Center.X) * (far.X - openSpace.Center.X) + (far.Y - openSpace.Center.Y) * (far.Y - openSpace.Center.Y));
+                if (reach <= openSpace.RadiusMetres - _touch) continue;
+                Sink.Error(b.Token["shape"] ?? b.Token, $"{kind} \"{b.Name}\" touches the open enclosure's circle (radius {UnitTable.Format(openSpace.RadiusMetres, QuantityKind.Length)})",
+                    "enlarge \"radius\", or give \"margin\" instead so that the circle clears every body", new Point2(far.X, far.Y));
+                ok = false;
+            }
+            if (!ok) return null;
+        }
 
         // Enclosure edges held at the enclosure potential (not symmetry planes, not the axis).
         var wallLines = enclosure.Shape.Outer.Segments
@@ -283,7 +402,8 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
 
         // A design needs two different potentials, or a charged floating conductor, to have any field.
         var potentials = conductors.Where(c => c.PotentialVolts is not null).Select(c => c.PotentialVolts!.Value).ToHashSet();
-        if (wallLines.Length > 0) potentials.Add(enclosure.PotentialVolts);
+        // Infinity is a reference at the enclosure potential in axisymmetric open space; planar open space has none.
+        if (wallLines.Length > 0 || (enclosure.IsOpen && axisymmetric)) potentials.Add(enclosure.PotentialVolts);
         bool charged = conductors.Any(c => c.ChargeCoulombs is double q && q != 0);
         if (potentials.Count < 2 && !charged && !earlierErrors)
         {

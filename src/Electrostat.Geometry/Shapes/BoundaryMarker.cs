@@ -12,4 +12,7 @@ public enum BoundaryMarker
 
     /// <summary>The rotation axis r = 0 of an axisymmetric design: natural condition, never an electrode.</summary>
     Axis = 2,
+
+    /// <summary>The truncation circle of an open domain: the solver continues the field beyond it (no condition imposed).</summary>
+    OpenBoundary = 3,
 }

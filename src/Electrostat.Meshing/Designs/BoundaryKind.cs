@@ -17,4 +17,10 @@ public enum BoundaryKind
 
     /// <summary>Interface between two different meshed regions (material interface).</summary>
     Interface = 4,
+
+    /// <summary>The truncation circle of a design in open space (its field continues in the image disc).</summary>
+    OpenBoundary = 5,
+
+    /// <summary>The circle of the open-space image disc, which stands for all space outside <see cref="OpenBoundary"/>.</summary>
+    OpenBoundaryImage = 6,
 }

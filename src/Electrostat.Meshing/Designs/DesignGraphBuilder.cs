@@ -20,6 +20,9 @@ namespace Electrostat.Meshing.Designs;
 /// </remarks>
 public static class DesignGraphBuilder
 {
+    /// <summary>Largest chord angle on an open-space circle: 64 chords per full turn (common practice for a smooth far field).</summary>
+    private const double OpenCircleChordAngle = 2 * Math.PI / 64;
+
     private readonly record struct Piece(double X0, double Y0, double X1, double Y1, SegmentSource Source, BoundaryMarker Marker);
 
     /// <summary>Builds the mesher input for a design.</summary>
@@ -127,11 +130,81 @@ public static class DesignGraphBuilder
         var areas = new Dictionary<int, double>();
         foreach (int attr in present.Keys)
             areas[attr] = attr == 0 ? design.Regions.BackgroundAreaSquareMetres : design.Regions.DielectricAreasSquareMetres[attr - 1];
+        OpenSpaceImage? image = design.Enclosure.Open is { } open
+            ? AddOpenSpaceImage(design, open, graph, tags, segSources, vertexSources, areas)
+            : null;
         // Chord polygons differ from the curves by at most chord × sagitta per chord; the region assembly flattens
         // with its own tolerance, adding the same kind of error.
         double perimeter = pieces.Sum(p => Math.Sqrt((p.X1 - p.X0) * (p.X1 - p.X0) + (p.Y1 - p.Y0) * (p.Y1 - p.Y0)));
         areaTol += perimeter * design.Regions.ChordToleranceMetres + 1e-12 * diag * diag;
-        return new DesignMeshInput(graph, tags, present.Values.ToArray(), segSources.ToArray(), vertexSources.ToArray(), areas, areaTol);
+        return new DesignMeshInput(graph, tags, present.Values.ToArray(), segSources.ToArray(), vertexSources.ToArray(), areas, areaTol)
+        {
+            OpenSpace = image,
+        };
+    }
+
+    /// <summary>
+    /// Adds the Kelvin image of the space outside an open design's truncation circle: a copy of the circle's chords
+    /// (same angles, same radius) about a centre 3R beside the design (+x planar, +z along the axis when
+    /// axisymmetric), the image centre as a vertex, and a region seed. The image region is the next free attribute.
+    /// </summary>
+    private static OpenSpaceImage AddOpenSpaceImage(Design design, OpenSpace open, PlanarGraph graph, BoundaryTagTable tags,
+        List<SegmentSource> segSources, List<SegmentSource> vertexSources, Dictionary<int, double> areas)
+    {
+        bool axi = design.Symmetry == Symmetry.Axisymmetric;
+        double r = open.RadiusMetres;
+        double cx = open.Center.X, cy = open.Center.Y;
+        double ix = axi ? 0 : cx + 3 * r, iy = axi ? cy + 3 * r : cy;
+        int interiorTag = tags.GetOrAdd(BoundaryKind.OpenBoundary, -1, -1, -1, -1);
+        int imageTag = tags.GetOrAdd(BoundaryKind.OpenBoundaryImage, -1, -1, -1, -1);
+        int imageRegion = design.Dielectrics.Count + 1;
+        var copy = new Dictionary<int, int>();
+        var imageSource = new SegmentSource(SourceEntity.Enclosure, 0, 0, 0);
+        int Copy(int v)
+        {
+            if (copy.TryGetValue(v, out int w)) return w;
+            w = graph.AddVertex(graph.X[v] - cx + ix, graph.Y[v] - cy + iy);
+            vertexSources.Add(imageSource);
+            copy[v] = w;
+            return w;
+        }
+        double twiceArea = 0;
+        int count = graph.Segments.Count;
+        for (int s = 0; s < count; s++)
+        {
+            var seg = graph.Segments[s];
+            if (seg.Tag != interiorTag) continue;
+            int a = Copy(seg.A), b = Copy(seg.B);
+            graph.AddSegment(a, b, imageTag);
+            segSources.Add(imageSource);
+            twiceArea += (graph.X[a] - ix) * (graph.Y[b] - iy) - (graph.X[b] - ix) * (graph.Y[a] - iy);
+        }
+        int centre = graph.AddVertex(ix, iy);
+        vertexSources.Add(imageSource);
+        if (axi)
+        {
+            // The image's straight edge lies on the axis: bottom → centre → top, natural like the design's axis.
+            int axisTag = tags.GetOrAdd(BoundaryKind.Axis, -1, -1, -1, -1);
+            int bottom = Copy(FindVertex(graph, cx, cy - r, r)), top = Copy(FindVertex(graph, cx, cy + r, r));
+            graph.AddSegment(bottom, centre, axisTag);
+            graph.AddSegment(centre, top, axisTag);
+            segSources.Add(imageSource);
+            segSources.Add(imageSource);
+        }
+        // The image starts at about the chord size of its circle; adaptive refinement takes it on from there.
+        graph.AddRegion(new RegionSeed(ix + 0.5 * r, iy + 0.1 * r, imageRegion, 0.1 * r));
+        areas[imageRegion] = 0.5 * Math.Abs(twiceArea);
+        return new OpenSpaceImage(interiorTag, imageTag, imageRegion, r, cx, cy, ix, iy, design.BackgroundMaterial);
+    }
+
+    private static int FindVertex(PlanarGraph graph, double x, double y, double scale)
+    {
+        double tol2 = 1e-18 * scale * scale;
+        for (int v = 0; v < graph.VertexCount; v++)
+        {
+            if ((graph.X[v] - x) * (graph.X[v] - x) + (graph.Y[v] - y) * (graph.Y[v] - y) <= tol2) return v;
+        }
+        throw new MeshInputException($"The open-space circle has no vertex on the axis at ({PlanarGraph.Fmt(x)}, {PlanarGraph.Fmt(y)}) m.");
     }
 
     private static int Attribute(RegionHit h) => h.Kind switch
@@ -155,6 +228,7 @@ public static class DesignGraphBuilder
         {
             BoundaryMarker.SymmetryPlane => BoundaryKind.SymmetryPlane,
             BoundaryMarker.Axis => BoundaryKind.Axis,
+            BoundaryMarker.OpenBoundary => BoundaryKind.OpenBoundary,
             _ => BoundaryKind.Enclosure,
         };
         return tags.GetOrAdd(kind, -1, -1, -1, -1);
@@ -168,11 +242,17 @@ public static class DesignGraphBuilder
             double sweep = Math.Abs(arc.SweepAngle);
             double r = arc.Radius;
             int n = (int)Math.Ceiling(sweep / maxAngle - 1e-9);
-            if (chordTol < r) n = Math.Max(n, (int)Math.Ceiling(sweep / (2 * Math.Acos(1 - chordTol / r)) - 1e-9));
+            // The open-space circle is not a physical surface: a fixed number of chords per turn replaces the sagitta rule
+            // (its chord gap shorts a sliver of thickness ~2·sagitta, which changes a capacitance by < 0.1 % × a/R at
+            // 64 chords per turn, a the body's size; verified in the isolated-sphere validation case).
+            bool openCircle = seg.Marker == BoundaryMarker.OpenBoundary;
+            if (chordTol < r && !openCircle) n = Math.Max(n, (int)Math.Ceiling(sweep / (2 * Math.Acos(1 - chordTol / r)) - 1e-9));
             var mid = arc.PointAt(0.5);
             double h = options.MaxEdgeLengthMetres ?? double.PositiveInfinity;
             if (options.SizeFunction is not null) h = Math.Min(h, options.SizeFunction(mid.X, mid.Y));
             if (h < 2 * r) n = Math.Max(n, (int)Math.Ceiling(sweep / (2 * Math.Asin(h / (2 * r))) - 1e-9));
+            // The open-space circle is never split later (its image must keep the same vertices): cut it finely now.
+            if (openCircle) n = Math.Max(n, (int)Math.Ceiling(sweep / OpenCircleChordAngle - 1e-9));
             n = Math.Max(n, 1);
             var prev = arc.Start;
             for (int i = 1; i <= n; i++)

@@ -21,6 +21,12 @@ public sealed class DesignMeshInput
         AreaToleranceSquareMetres = areaTolerance;
     }
 
+    /// <summary>The open-space image piece, or null for a closed enclosure.</summary>
+    public OpenSpaceImage? OpenSpace { get; internal init; }
+
+    /// <summary>Segment tags the mesher must never split (the open-space circles); empty for a closed enclosure.</summary>
+    public IReadOnlySet<int> ProtectedTags => OpenSpace is { } o ? new HashSet<int> { o.InteriorTag, o.ImageTag } : new HashSet<int>();
+
     /// <summary>The graph handed to the mesher (metres).</summary>
     public PlanarGraph Graph { get; }
 
@@ -36,7 +42,8 @@ public sealed class DesignMeshInput
     /// <summary>For each input vertex of <see cref="Graph"/>, the design entity of one segment that ends there.</summary>
     public SegmentSource[] VertexSources { get; }
 
-    /// <summary>Area of each region attribute from the exact design geometry (NetTopologySuite region assembly), m².</summary>
+    /// <summary>Area of each region attribute from the exact design geometry (NetTopologySuite region assembly), m²; the
+    /// open-space image region, when present, has the area of its chord polygon.</summary>
     public IReadOnlyDictionary<int, double> ExpectedRegionAreas { get; }
 
     /// <summary>Bound on the area difference between the chord-polygon outlines and the exact curves, m².</summary>

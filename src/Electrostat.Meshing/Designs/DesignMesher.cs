@@ -14,6 +14,11 @@ public static class DesignMesher
     public static (DesignMeshInput Input, RefinableMesh Mesh) Create(Design design, MeshOptions? options = null, DesignMeshSettings? settings = null)
     {
         var input = DesignGraphBuilder.Build(design, options, settings);
+        if (input.ProtectedTags.Count > 0)
+        {
+            options ??= new MeshOptions();
+            options = options with { ProtectedTags = new HashSet<int>(options.ProtectedTags.Concat(input.ProtectedTags)) };
+        }
         return (input, RefinableMesh.Create(input.Graph, options));
     }
 

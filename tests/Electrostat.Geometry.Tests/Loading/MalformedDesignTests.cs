@@ -14,6 +14,8 @@ public class MalformedDesignTests
     /// <param name="Severity">Expected severity.</param>
     public sealed record Case((string Old, string New)[] Edits, string Message, string? Needle, bool CheckColumn, ProblemSeverity Severity = ProblemSeverity.Error);
 
+    private const string OpenEnclosure = "\"enclosure\": { \"shape\": { \"type\": \"rectangle\", \"min\": [-50, -50], \"max\": [50, 50] }, \"potential\": 0 }";
+
     public static readonly Dictionary<string, Case> Cases = new()
     {
         ["json-syntax"] = new([("\"symmetry\": \"planar\",", "\"symmetry\": \"planar\"")], "JSON syntax error", "\"parameters\"", false),
@@ -67,6 +69,15 @@ public class MalformedDesignTests
         ["pair-unknown-conductor"] = new([("\"dielectrics\": [", "\"checks\": { \"pairs\": [ { \"between\": [\"hv\", \"gnx\"], \"min_clearance\": 3 } ] },\n  \"dielectrics\": [")], "unknown conductor \"gnx\"", "\"gnx\"", true),
         ["checks-unknown-material"] = new([("\"dielectrics\": [", "\"checks\": { \"materials\": { \"oli\": { \"min_margin\": 2 } } },\n  \"dielectrics\": [")], "did you mean 'oil'?", "\"oli\"", true),
         ["floating-touches-wall"] = new([("\"potential\": \"10 kV\"", "\"floating\": true"), ("\"center\": [0, 10]", "\"center\": [0, 45]")], "floating conductor \"hv\" touches the enclosure", "{ \"name\": \"hv\"", true),
+        // Open space (Kelvin truncation circle): each misuse named at its key.
+        ["open-with-shape"] = new([("\"potential\": 0 }", "\"open\": true, \"potential\": 0 }")], "an open enclosure is a circle set by \"radius\" or \"margin\", not by \"shape\"", "\"shape\": { \"type\": \"rectangle\", \"min\": [-50", true),
+        ["open-planar-potential"] = new([(OpenEnclosure, "\"enclosure\": { \"open\": true, \"margin\": 10, \"potential\": 0 }")], "no fixed potential at infinity", "\"potential\": 0 }", true),
+        ["open-no-size"] = new([(OpenEnclosure, "\"enclosure\": { \"open\": true }")], "needs \"margin\" or \"radius\"", "{ \"open\"", true),
+        ["open-radius-and-margin"] = new([(OpenEnclosure, "\"enclosure\": { \"open\": true, \"margin\": 10, \"radius\": 60 }")], "has both \"radius\" and \"margin\"", "{ \"open\"", true),
+        ["open-with-symmetry-plane"] = new([(OpenEnclosure, "\"enclosure\": { \"open\": true, \"margin\": 10, \"symmetry_planes\": [{ \"x\": 0 }] }")], "symmetry planes cannot be combined with an open enclosure", "{ \"x\": 0 }", true),
+        ["open-circle-cuts-body"] = new([(OpenEnclosure, "\"enclosure\": { \"open\": true, \"radius\": \"sqrt(1800)\", \"center\": [0, 0] }")], "touches the open enclosure's circle", "{ \"type\": \"rectangle\", \"min\": [-30, 20]", true),
+        ["radius-without-open"] = new([("\"potential\": 0 }", "\"potential\": 0, \"radius\": 60 }")], "\"radius\" belongs to an open enclosure", "\"radius\": 60", true),
+        ["open-axisymmetric-centre-off-axis"] = new([("\"planar\"", "\"axisymmetric\""), (OpenEnclosure, "\"enclosure\": { \"open\": true, \"margin\": 10, \"center\": [5, 0] }")], "must lie on the axis", "[5, 0]", true),
         ["arc-end-off-circle"] = new([("{ \"type\": \"rectangle\", \"min\": [-30, 20], \"max\": [30, 30] }", "{ \"type\": \"path\", \"start\": [-10, 20], \"segments\": [ { \"line_to\": [10, 20] }, { \"arc_to\": [-12, 20], \"center\": [0, 20] } ] }")], "end point is 12 mm from the centre but the start is 10 mm", "[-12, 20]", true),
     };
 
