@@ -1,0 +1,49 @@
+using Electrostat.Analysis.Pipeline;
+using Electrostat.Analysis.Tests.Adaptivity;
+using Electrostat.Fem.Problem;
+using Electrostat.Meshing.Designs;
+
+namespace Electrostat.Analysis.Tests.Pipeline;
+
+/// <summary>Open space through the whole pipeline: the Kelvin image is solved but never reported.</summary>
+public class OpenSpacePipelineTests
+{
+    [Fact]
+    public void OpenDesign_GetsTheKelvinBoundary_WithNoRoleOnTheCircles()
+    {
+        var design = AdaptiveTestSupport.Load("geometries/validation/isolated-sphere.json");
+        var (input, result) = DesignMesher.Generate(design);
+        var built = DesignProblemBuilder.Build(design, input, result.Mesh);
+        var kelvin = Assert.IsType<KelvinOpenBoundary>(built.Problem.OpenBoundary);
+        var image = input.OpenSpace!;
+        Assert.Equal(image.ImageRegion, kelvin.ExteriorRegion);
+        Assert.Equal(design.Enclosure.PotentialVolts, kelvin.PotentialAtInfinityVolts);
+        Assert.False(built.Problem.Boundaries.ContainsKey(kelvin.InteriorArcTag));
+        Assert.False(built.Problem.Boundaries.ContainsKey(kelvin.ExteriorArcTag));
+        // The image region has the background's permittivity but no design meaning.
+        Assert.True(built.Problem.Materials.ContainsKey(image.ImageRegion));
+        Assert.DoesNotContain(built.Regions, r => r.Attribute == image.ImageRegion);
+    }
+
+    [Fact]
+    public void OpenLinePair_ChargesSumToZero_AndNothingIsReportedFromTheImage()
+    {
+        var design = AdaptiveTestSupport.Load("geometries/validation/two-wire-open.json");
+        var outcome = SolvePipeline.Run(design, AccuracyLevel.Coarse);
+        var open = design.Enclosure.Open!;
+        bool Inside(double x, double y) =>
+            Math.Sqrt((x - open.Center.X) * (x - open.Center.X) + (y - open.Center.Y) * (y - open.Center.Y)) <= open.RadiusMetres * (1 + 1e-9);
+        // Planar open space leaves infinity free: no net flux leaves, so each row of the Maxwell matrix sums to ~0.
+        var cap = outcome.Adaptive.Capacitance!;
+        for (int i = 0; i < 2; i++) Assert.True(Math.Abs(cap.ToEnclosure(i)) < 1e-6 * cap.Maxwell[i, i], $"row {i} sums to {cap.ToEnclosure(i):E3}");
+        // Peaks and hot spots come from the design side only.
+        Assert.All(outcome.Adaptive.Levels.SelectMany(l => l.Peaks), p => Assert.True(Inside(p.XMetres, p.YMetres), $"peak at ({p.XMetres}, {p.YMetres})"));
+        Assert.NotEmpty(outcome.Analysis.HotSpots);
+        Assert.All(outcome.Analysis.HotSpots, h => Assert.True(Inside(h.XMetres, h.YMetres), $"hot spot at ({h.XMetres}, {h.YMetres})"));
+        Assert.All(outcome.Analysis.HotSpots, h => Assert.True(double.IsFinite(h.MergeRadiusMetres)));
+        // The truncation circle is no conductor: the only clearance is between the wires (10 mm centres, radius 1 mm).
+        var pair = Assert.Single(outcome.Analysis.Clearances.Pairs);
+        Assert.Equal(["left", "right"], new[] { pair.ConductorA, pair.ConductorB }.Order());
+        Assert.Equal(8e-3, pair.DistanceMetres, 9);
+    }
+}
