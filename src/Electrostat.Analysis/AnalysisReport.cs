@@ -1,5 +1,6 @@
 using Electrostat.Analysis.Clearance;
 using Electrostat.Analysis.Corners;
+using Electrostat.Analysis.Enhancement;
 using Electrostat.Analysis.Forces;
 using Electrostat.Analysis.HotSpots;
 using Electrostat.Analysis.Margins;
@@ -16,6 +17,7 @@ namespace Electrostat.Analysis;
 /// <param name="Forces">Energy and force per conductor.</param>
 /// <param name="EstimatedRelativeFieldError">Zienkiewicz–Zhu estimate of the relative energy-norm error of the field.</param>
 /// <param name="Warnings">One line per warning (singular corners first).</param>
+/// <param name="FieldEnhancement">Highest field over the mean field of the most stressed gap; null without a gap.</param>
 public sealed record AnalysisReport(
     IReadOnlyList<HotSpot> HotSpots,
     IReadOnlyList<SurfaceFieldProfile> SurfaceProfiles,
@@ -24,7 +26,8 @@ public sealed record AnalysisReport(
     IReadOnlyList<SingularCorner> SingularCorners,
     ForceReport Forces,
     double EstimatedRelativeFieldError,
-    IReadOnlyList<string> Warnings)
+    IReadOnlyList<string> Warnings,
+    FieldEnhancement? FieldEnhancement = null)
 {
     /// <summary>Fail when a margin or clearance check fails; pass when at least one check passed and none failed; else not checked.</summary>
     public CheckVerdict Verdict =>

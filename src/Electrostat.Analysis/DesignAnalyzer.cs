@@ -1,6 +1,7 @@
 using System.Globalization;
 using Electrostat.Analysis.Clearance;
 using Electrostat.Analysis.Corners;
+using Electrostat.Analysis.Enhancement;
 using Electrostat.Analysis.Forces;
 using Electrostat.Analysis.HotSpots;
 using Electrostat.Analysis.Margins;
@@ -10,7 +11,7 @@ namespace Electrostat.Analysis;
 
 /// <summary>
 /// The single entry point of the analysis layer: from a solved design to an <see cref="AnalysisReport"/> (hot spots,
-/// surface profiles, margins, clearances, singular corners, energy and forces).
+/// surface profiles, margins, clearances, singular corners, energy and forces, field enhancement factor).
 /// </summary>
 /// <remarks>
 /// Usage: <c>var report = DesignAnalyzer.Analyze(new AnalysisContext(design, meshInput.Tags, meshInput.Regions, solution));</c>.
@@ -42,6 +43,7 @@ public static class DesignAnalyzer
                 warnings.Add(string.Format(inv, "Material '{0}' has no breakdown field: its margin is not checked (peak {1:G4} kV/mm).", m.MaterialName, m.PeakFieldKilovoltsPerMillimetre));
         }
         if (clearances.PcbCaution is not null) warnings.Add(clearances.PcbCaution);
-        return new AnalysisReport(hotSpots, profiles, margins, clearances, corners, forces, context.Recovered.EstimatedRelativeError, warnings);
+        var enhancement = FieldEnhancementCalculator.Compute(margins, clearances);
+        return new AnalysisReport(hotSpots, profiles, margins, clearances, corners, forces, context.Recovered.EstimatedRelativeError, warnings, enhancement);
     }
 }

@@ -197,6 +197,27 @@ public static class ResultsJsonWriter
         }
         w.WriteEndArray();
 
+        if (an.FieldEnhancement is { } fe)
+        {
+            w.WriteStartObject("field_enhancement");
+            Num(w, "factor", fe.Factor);
+            Num(w, "utilisation", fe.Utilisation);
+            Num(w, "peak_field_V_per_m", fe.PeakFieldVoltsPerMetre);
+            w.WriteString("peak_material", fe.PeakMaterial);
+            Num(w, "peak_x_m", fe.PeakXMetres);
+            Num(w, "peak_y_m", fe.PeakYMetres);
+            w.WriteString("gap_conductor_a", fe.ConductorA);
+            w.WriteString("gap_conductor_b", fe.ConductorB);
+            Num(w, "gap_voltage_difference_V", fe.VoltageDifferenceVolts);
+            Num(w, "gap_m", fe.GapMetres);
+            Num(w, "mean_gap_field_V_per_m", fe.MeanGapFieldVoltsPerMetre);
+            w.WriteEndObject();
+        }
+        else
+        {
+            w.WriteNull("field_enhancement");
+        }
+
         w.WriteStartArray("clearances");
         foreach (var c in an.Clearances.Pairs)
         {

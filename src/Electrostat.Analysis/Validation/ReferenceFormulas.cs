@@ -64,6 +64,20 @@ public static class ReferenceFormulas
         return Eps0 * widthMetres / s;
     }
 
+    /// <summary>Field enhancement factor of coaxial cylinders, f = E(a)/(V/(b − a)) = (b − a)/(a·ln(b/a)) (from the
+    /// Gauss's-law field E(r) = V/(r·ln(b/a)), Griffiths ch. 2; the factor's definition as in Kuffel, Zaengl and Kuffel,
+    /// High Voltage Engineering: Fundamentals, §4.2, from memory).</summary>
+    /// <param name="innerRadiusMetres">a, metres.</param>
+    /// <param name="outerRadiusMetres">b, metres.</param>
+    public static double CoaxFieldEnhancementFactor(double innerRadiusMetres, double outerRadiusMetres) =>
+        (outerRadiusMetres - innerRadiusMetres) / (innerRadiusMetres * Math.Log(outerRadiusMetres / innerRadiusMetres));
+
+    /// <summary>Field enhancement factor of concentric spheres, f = E(a)/(V/(b − a)) = b/a (same sources).</summary>
+    /// <param name="innerRadiusMetres">a, metres.</param>
+    /// <param name="outerRadiusMetres">b, metres.</param>
+    public static double ConcentricSpheresFieldEnhancementFactor(double innerRadiusMetres, double outerRadiusMetres) =>
+        outerRadiusMetres / innerRadiusMetres;
+
     /// <summary>Isolated sphere in open space: C = 4πε0 a, F (Griffiths, Introduction to Electrodynamics, ch. 2; the
     /// b → ∞ limit of <see cref="ConcentricSpheresCapacitance"/>).</summary>
     /// <param name="radiusMetres">a, metres.</param>

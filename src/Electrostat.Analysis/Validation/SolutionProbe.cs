@@ -58,6 +58,16 @@ public static class SolutionProbe
         return new ValidationMeasurement(best.Value, best.RelativeError);
     }
 
+    /// <summary>The field enhancement factor f = E_max/(ΔV/d) and the estimate of its peak (d is exact).</summary>
+    /// <param name="outcome">A solve outcome.</param>
+    public static ValidationMeasurement FieldEnhancementFactor(SolveOutcome outcome)
+    {
+        ArgumentNullException.ThrowIfNull(outcome);
+        var fe = outcome.Analysis.FieldEnhancement ?? throw new InvalidOperationException("The design has no gap at a potential difference.");
+        var peak = outcome.Adaptive.PeakErrors.GetValueOrDefault(fe.PeakMaterial);
+        return new ValidationMeasurement(fe.Factor, peak?.RelativeError ?? double.NaN);
+    }
+
     /// <summary>The potential of a design conductor (volts), e.g. a floating one; no estimate.</summary>
     /// <param name="outcome">A solve outcome.</param>
     /// <param name="conductorName">Design conductor name.</param>

@@ -27,6 +27,10 @@ internal static class SolveSummary
             var e = a.PeakErrors.GetValueOrDefault(p.MaterialName);
             w.WriteLine(string.Create(c, $"  {p.MaterialName,-20} {p.FieldVoltsPerMetre * 1e-6,10:G5} kV/mm  +/- {Pct(e?.RelativeError)}  at ({Mm(p.XMetres)}, {Mm(p.YMetres)}) mm{(p.OnConductorSurface ? " on a conductor" : "")}"));
         }
+        if (an.FieldEnhancement is { } fe)
+        {
+            w.WriteLine(string.Create(c, $"field enhancement factor {fe.Factor:G4} (utilisation {fe.Utilisation:G3}): peak {fe.PeakFieldVoltsPerMetre * 1e-6:G5} kV/mm over the mean {fe.MeanGapFieldVoltsPerMetre * 1e-6:G5} kV/mm of gap {fe.ConductorA} - {fe.ConductorB} ({Mm(fe.GapMetres)} mm)"));
+        }
         if (an.Margins.Materials.Count > 0)
         {
             w.WriteLine("breakdown margins");

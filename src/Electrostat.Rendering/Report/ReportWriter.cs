@@ -163,6 +163,10 @@ public static class ReportWriter
         }
         h.Raw("</tbody></table>\n");
         h.Raw("<p class=\"note\">").Text($"Coordinates in {unit.Symbol}{(planar ? "" : " (x = r, y = z)")}. Field values are recovered nodal values on the side of the named material.").Raw("</p>");
+        if (a.FieldEnhancement is { } fe)
+        {
+            h.Raw("<p id=\"field-enhancement\">").Text($"Field enhancement factor f = E_max / (ΔV/d) = {Num(fe.Factor)} (utilisation factor η = {Num(fe.Utilisation)}): the peak of {Num(fe.PeakFieldVoltsPerMetre * 1e-6)} kV/mm in {fe.PeakMaterial} against the mean field {Num(fe.MeanGapFieldVoltsPerMetre * 1e-6)} kV/mm of the most stressed gap, {fe.ConductorA} – {fe.ConductorB} ({Labels.Volts(fe.VoltageDifferenceVolts)} across {Num(fe.GapMetres / unit.Metres)} {unit.Symbol}). f = 1 is a uniform field; singular corners are excluded.").Raw("</p>");
+        }
         h.EndSection();
 
         // 5. Margins
