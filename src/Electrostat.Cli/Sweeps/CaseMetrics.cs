@@ -7,7 +7,8 @@ namespace Electrostat.Cli.Sweeps;
 /// The figures a sweep records for each case, by name. Names are also the goal grammar's subjects:
 /// <c>peak[MATERIAL]</c> (V/m), <c>margin[MATERIAL]</c> and <c>margin</c> (the smallest over materials with a
 /// breakdown field), <c>clearance[A,B]</c> and <c>clearance</c> (the smallest, m), <c>capacitance[A,B]</c> (Maxwell
-/// entry; F/m per metre of depth for planar designs, F for axisymmetric, as in results.json).
+/// entry; F/m per metre of depth for planar designs, F for axisymmetric, as in results.json) and <c>enhancement</c> (the
+/// field enhancement factor E_max/(ΔV/d) of the most stressed gap).
 /// </summary>
 internal static class CaseMetrics
 {
@@ -30,6 +31,7 @@ internal static class CaseMetrics
             minClear = minClear is double y ? Math.Min(y, c.DistanceMetres) : c.DistanceMetres;
         }
         if (o.Analysis.Clearances.Pairs.Count > 0) m["clearance"] = minClear;
+        if (o.Analysis.FieldEnhancement is { } fe) m["enhancement"] = fe.Factor;
         if (o.Adaptive.Capacitance is { } cap)
             for (int i = 0; i < cap.Count; i++)
                 for (int j = 0; j < cap.Count; j++) m[$"capacitance[{cap.TerminalNames[i]},{cap.TerminalNames[j]}]"] = cap.Maxwell[i, j];
@@ -40,7 +42,7 @@ internal static class CaseMetrics
     public static string Unit(string name, bool planar) => name switch
     {
         _ when name.StartsWith("peak", StringComparison.Ordinal) => "V/m",
-        _ when name.StartsWith("margin", StringComparison.Ordinal) => "1",
+        _ when name.StartsWith("margin", StringComparison.Ordinal) || name == "enhancement" => "1",
         _ when name.StartsWith("clearance", StringComparison.Ordinal) => "m",
         _ => planar ? "F/m" : "F",
     };

@@ -18,9 +18,9 @@ internal sealed partial record SweepGoal(string Text, string Subject, string Ope
     /// <summary>The goal grammar, for usage and error messages.</summary>
     public const string Grammar =
         "SUBJECT OP NUMBER [UNIT], SUBJECT one of margin, margin[MATERIAL], peak[MATERIAL], clearance, clearance[A,B], " +
-        "capacitance[A,B]; OP one of >= <= > <; e.g. \"margin >= 2\", \"peak[air] <= 5 kV/mm\", \"clearance >= 8 mm\"";
+        "capacitance[A,B], enhancement; OP one of >= <= > <; e.g. \"margin >= 2\", \"peak[air] <= 5 kV/mm\", \"clearance >= 8 mm\"";
 
-    [GeneratedRegex(@"^\s*(?<s>margin|peak|clearance|capacitance)(?<b>\[[^\]]+\])?\s*(?<op>>=|<=|>|<)\s*(?<n>[-+0-9.eE]+)\s*(?<u>\S*)\s*$")]
+    [GeneratedRegex(@"^\s*(?<s>margin|peak|clearance|capacitance|enhancement)(?<b>\[[^\]]+\])?\s*(?<op>>=|<=|>|<)\s*(?<n>[-+0-9.eE]+)\s*(?<u>\S*)\s*$")]
     private static partial Regex Pattern();
 
     /// <summary>Parses a goal.</summary>
@@ -32,10 +32,12 @@ internal sealed partial record SweepGoal(string Text, string Subject, string Ope
             throw new UsageException($"--goal \"{text}\" is not understood; write {Grammar}");
         string s = m.Groups["s"].Value, b = m.Groups["b"].Value, u = m.Groups["u"].Value;
         if (s == "peak" && b.Length == 0) throw new UsageException($"--goal \"{text}\": name the material, e.g. peak[air] <= 5 kV/mm");
+        if (s == "enhancement" && b.Length > 0) throw new UsageException($"--goal \"{text}\": enhancement takes no brackets (it is the design's field enhancement factor)");
         if (s == "capacitance" && b.Length == 0) throw new UsageException($"--goal \"{text}\": name the two terminals, e.g. capacitance[tx,rx]");
         double factor = (s, u) switch
         {
             ("margin", "") => 1,
+            ("enhancement", "") => 1,
             ("peak", "" or "kV/mm") => 1e6,
             ("peak", "V/m") => 1,
             ("peak", "MV/m") => 1e6,

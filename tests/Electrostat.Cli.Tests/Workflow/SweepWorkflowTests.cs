@@ -71,6 +71,26 @@ public class SweepWorkflowTests
     }
 
     [Fact]
+    public void GoalSeek_OnTheFieldEnhancementFactor_FindsTheCoaxRadius()
+    {
+        // Coax, outer radius b = 10 mm: f = (b − a)/(a·ln(b/a)) (Gauss's law field, Griffiths ch. 2, over the mean field
+        // V/(b − a)) falls as the inner radius a grows; f = 2 at a = 2.847 mm (solved by hand from the closed form).
+        using var dir = new WorkflowDesigns();
+        string design = dir.Write("coax.json", """
+            { "units": "mm", "symmetry": "planar", "parameters": { "a": 2 },
+              "enclosure": { "shape": { "type": "circle", "center": [0, 0], "radius": 10 } },
+              "conductors": [ { "name": "inner", "potential": "1 kV", "shape": { "type": "circle", "center": [0, 0], "radius": "a" } } ] }
+            """);
+        var (exit, stdout, stderr) = CliRun.Run("sweep", design, "--vary", "a=1..5", "--steps", "3", "--goal", "enhancement <= 2",
+            "--tolerance", "0.05", "--accuracy", "coarse", "--threads", "2", "--out", dir.PathOf("goal"), "--json");
+        Assert.True(exit == 0, stdout + stderr);
+        var goal = JObject.Parse(stdout)["goal"]!;
+        Assert.True((bool)goal["found"]!);
+        double a = (double)goal["value"]!;
+        Assert.InRange(a, 2.847 - 0.1, 2.847 + 0.1);
+    }
+
+    [Fact]
     public void GoalSeek_Unreachable_ExitsOne()
     {
         using var dir = new WorkflowDesigns();
@@ -152,6 +172,7 @@ public class SweepWorkflowTests
     [InlineData("peak[air] <= 5 kV/mm", "peak[air]", "<=", 5e6)]
     [InlineData("clearance[a, b] > 8", "clearance[a,b]", ">", 8e-3)]
     [InlineData("capacitance[tx,rx] < -0.5 pF", "capacitance[tx,rx]", "<", -0.5e-12)]
+    [InlineData("enhancement <= 1.3", "enhancement", "<=", 1.3)]
     public void GoalGrammar_Parses(string text, string subject, string op, double threshold)
     {
         var g = SweepGoal.Parse(text);
