@@ -9,7 +9,7 @@ namespace Electrostat.Meshing;
 /// </summary>
 /// <remarks>
 /// Index mapping: triangle i of an exported <see cref="TriangleMesh"/> is internal triangle slot i, so indices from
-/// the latest export can be passed straight to <see cref="RefineTriangles"/>. Refinement reuses the slots of the
+/// the latest export can be passed straight to <see cref="RefineTriangles(IEnumerable{int})"/>. Refinement reuses the slots of the
 /// triangles it replaces and appends new ones, so after refining, an old index may name a different triangle: always
 /// export again. Vertices are never removed or reordered; exported vertex indices are the internal ones with unused
 /// vertices (input vertices outside the domain, the enclosing triangle) left out, so an exported vertex index stays
@@ -62,6 +62,20 @@ public sealed class RefinableMesh
         ArgumentNullException.ThrowIfNull(triangles);
         _version++;
         _core.RefineTriangles(triangles);
+    }
+
+    /// <summary>
+    /// Splits the given triangles, then <paramref name="passes"/> − 1 more times every triangle touching a vertex that
+    /// the previous pass inserted (a marked region grows about 1.7× per pass), restoring the quality bound each time.
+    /// </summary>
+    /// <param name="triangles">Triangle indices of the latest export to split.</param>
+    /// <param name="passes">Number of passes (1 is <see cref="RefineTriangles(IEnumerable{int})"/>).</param>
+    public void RefineTriangles(IEnumerable<int> triangles, int passes)
+    {
+        ArgumentNullException.ThrowIfNull(triangles);
+        ArgumentOutOfRangeException.ThrowIfLessThan(passes, 1);
+        _version++;
+        _core.RefineTriangles(triangles, passes);
     }
 
     /// <summary>

@@ -131,6 +131,38 @@ public class SizingAndRefinementTests
     }
 
     [Fact]
+    public void RefineTriangles_SecondPass_RefinesTheMarkedRegionFurther()
+    {
+        // The same marked disc refined with one and with two passes: the second pass splits every triangle touching a
+        // vertex of the first, so the region ends with more (and smaller) triangles, and the mesh stays valid.
+        var g = new PlanarGraph();
+        g.AddPolygon(TestGraphs.Rect(0, 0, 1, 1), 1);
+        int Refined(int passes, out MeshResult result)
+        {
+            var rm = RefinableMesh.Create(g, new MeshOptions { MaxEdgeLengthMetres = 0.05 });
+            var m = rm.Export().Mesh;
+            var pick = Enumerable.Range(0, m.TriangleCount).Where(t =>
+            {
+                var (x, y) = Centroid(m, t);
+                return (x - 0.5) * (x - 0.5) + (y - 0.5) * (y - 0.5) < 0.04;
+            }).ToArray();
+            rm.RefineTriangles(pick, passes);
+            result = rm.Export();
+            var after = result.Mesh;
+            return Enumerable.Range(0, after.TriangleCount).Count(t =>
+            {
+                var (x, y) = Centroid(after, t);
+                return (x - 0.5) * (x - 0.5) + (y - 0.5) * (y - 0.5) < 0.03;
+            });
+        }
+        int one = Refined(1, out var r1), two = Refined(2, out var r2);
+        Assert.True(r2.Validate(new Dictionary<int, double> { [0] = 1.0 }).IsValid);
+        Assert.True(r2.Quality.MinAngleDegrees >= 28);
+        Assert.True(two > 1.4 * one, $"inside the disc: one pass {one} triangles, two passes {two}");
+        Assert.Throws<ArgumentOutOfRangeException>(() => RefinableMesh.Create(g).RefineTriangles([0], 0));
+    }
+
+    [Fact]
     public void RefineToSize_MeetsNewSizeEverywhere()
     {
         var g = new PlanarGraph();

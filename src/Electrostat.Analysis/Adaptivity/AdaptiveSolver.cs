@@ -11,7 +11,7 @@ namespace Electrostat.Analysis.Adaptivity;
 
 /// <summary>
 /// The adaptive loop: solve → estimate (<see cref="ResidualErrorEstimator"/>) → mark (<see cref="DorflerMarking"/>)
-/// → refine locally (<see cref="RefinableMesh.RefineTriangles"/>) → solve again, warm-started from the previous
+/// → refine locally (<see cref="RefinableMesh.RefineTriangles(IEnumerable{int}, int)"/>) → solve again, warm-started from the previous
 /// solution (<see cref="WarmStart"/>), until the peaks and capacitances settle or the element budget is reached.
 /// </summary>
 /// <remarks>
@@ -88,7 +88,7 @@ public static class AdaptiveSolver
                 break;
             }
             int n = current.Mesh.TriangleCount;
-            double growth = levels.Count >= 2 ? Math.Max(1.2, (double)n / levels[^2].Triangles) : 2.0;
+            double growth = levels.Count >= 2 ? Math.Max(1.2, (double)n / levels[^2].Triangles) : Math.Pow(1.7, options.SplitPasses);
             if (n * growth > options.MaxTriangles)
             {
                 reason = $"not converged: the next level would exceed the element budget of {options.MaxTriangles:N0} triangles";
@@ -102,13 +102,13 @@ public static class AdaptiveSolver
                 break;
             }
             int minCount = (int)Math.Ceiling(options.MinimumMarkedFraction * n);
-            int maxCount = Math.Max(1, (options.MaxTriangles - n) / 4);
+            int maxCount = Math.Max(1, (int)((options.MaxTriangles - n) / (4 * Math.Pow(1.7, options.SplitPasses - 1))));
             var marked = DorflerMarking.Mark(eta2, options.Theta, minCount, maxCount);
             levels[^1] = level with { EstimateSeconds = sw.Elapsed.TotalSeconds };
 
             sw.Restart();
             var old = current.Mesh;
-            mesh.RefineTriangles(marked);
+            mesh.RefineTriangles(marked, options.SplitPasses);
             current = mesh.Export();
             warm = WarmStart.Interpolate(old, solution.PotentialVolts, current.Mesh);
             meshSeconds = sw.Elapsed.TotalSeconds;

@@ -97,6 +97,29 @@ internal sealed partial class MeshCore
         Run();
     }
 
+    /// <summary>
+    /// Splits the given triangles, then <paramref name="passes"/> − 1 more times splits every triangle that touches a
+    /// vertex inserted by the previous pass, so that a marked region is refined about 1.7× per pass.
+    /// </summary>
+    internal void RefineTriangles(IEnumerable<int> triangles, int passes)
+    {
+        int first = NV;
+        RefineTriangles(triangles);
+        var around = new List<int>();
+        for (int pass = 1; pass < passes; pass++)
+        {
+            int firstNew = first;
+            first = NV;
+            if (firstNew == first) break; // nothing was inserted
+            around.Clear();
+            for (int t = 0; t < NT; t++)
+            {
+                if (TV[3 * t] >= firstNew || TV[3 * t + 1] >= firstNew || TV[3 * t + 2] >= firstNew) around.Add(t);
+            }
+            RefineTriangles(around);
+        }
+    }
+
     private void Run()
     {
         while (true)
