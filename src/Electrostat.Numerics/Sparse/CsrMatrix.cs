@@ -18,7 +18,7 @@ namespace Electrostat.Numerics.Sparse;
 /// </remarks>
 public sealed class CsrMatrix
 {
-    private RowPartition? _partition;
+    private PartitionCache? _partition;
 
     /// <summary>Creates a matrix over existing arrays (not copied). Throws if the CSR invariants fail.</summary>
     /// <param name="rows">Number of rows.</param>
@@ -65,7 +65,22 @@ public sealed class CsrMatrix
     /// <summary>Number of stored entries.</summary>
     public int NonZeroCount => RowPointers[Rows];
 
-    internal RowPartition Partition => _partition ??= RowPartition.ByEntries(RowPointers, Rows, ParallelPolicy.DefaultWorkers);
+    /// <summary>The row split for the current worker count (<see cref="Parallelism.WorkerLimit"/> scope), cached per
+    /// count: a matrix built outside a limited scope and used inside one follows the scope's limit.</summary>
+    internal RowPartition Partition
+    {
+        get
+        {
+            int workers = ParallelPolicy.DefaultWorkers;
+            var cached = _partition;
+            if (cached is not null && cached.Workers == workers) return cached.Rows;
+            cached = new PartitionCache(workers, RowPartition.ByEntries(RowPointers, Rows, workers));
+            _partition = cached; // one reference write: readers see a consistent pair
+            return cached.Rows;
+        }
+    }
+
+    private sealed record PartitionCache(int Workers, RowPartition Rows);
 
     /// <summary>Checks the CSR invariants and throws <see cref="ArgumentException"/> naming the first violation.</summary>
     public void Validate()

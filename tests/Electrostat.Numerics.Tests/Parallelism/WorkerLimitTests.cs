@@ -38,5 +38,24 @@ public class WorkerLimitTests
     }
 
     [Fact]
+    public void MatrixBuiltOutsideAScope_SplitsItsRowsByTheScopesLimitInside()
+    {
+        // A matrix first used with all workers and then inside a one-worker scope must not keep the old split.
+        var a = TestProblems.JitteredP1(120);
+        var x = TestProblems.RandomVector(a.Rows, 1);
+        var y = new double[a.Rows];
+        a.Multiply(x, y);
+        int outside = a.Partition.Count;
+        using (WorkerLimit.Scope(1))
+        {
+            Assert.Equal(1, a.Partition.Count);
+            var y1 = new double[a.Rows];
+            a.Multiply(x, y1);
+            Assert.Equal(y, y1); // same products, summed row by row in the same order
+        }
+        Assert.Equal(outside, a.Partition.Count);
+    }
+
+    [Fact]
     public void Scope_RejectsZero() => Assert.Throws<ArgumentOutOfRangeException>(() => WorkerLimit.Scope(0));
 }
