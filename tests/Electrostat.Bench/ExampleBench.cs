@@ -20,7 +20,7 @@ internal sealed class ExampleBench : IBenchSuite
     public int Run(string[] args)
     {
         if (args.Length >= 2 && args[0] == "--child") return RunChild(args[1]);
-        var designs = args.Length > 0 ? args : FindDesigns();
+        var designs = args.Length > 0 ? args : RepoPaths.ExampleDesigns().ToArray();
         foreach (string path in designs)
         {
             var psi = new ProcessStartInfo(Environment.ProcessPath!) { RedirectStandardOutput = true, UseShellExecute = false };
@@ -63,17 +63,6 @@ internal sealed class ExampleBench : IBenchSuite
         Console.WriteLine(FormattableString.Invariant(
             $"examples case={name} triangles={a.Mesh.Mesh.TriangleCount} levels={a.Levels.Count} seconds={seconds:F3} adapt_overhead={a.AdaptOverhead:F2} peak_mb={PeakMegabytes():F0}"));
         return 0;
-    }
-
-    private static string[] FindDesigns()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !Directory.Exists(Path.Combine(dir.FullName, "geometries"))) dir = dir.Parent;
-        if (dir is null) return [];
-        string sep = Path.DirectorySeparatorChar.ToString();
-        return Directory.EnumerateFiles(Path.Combine(dir.FullName, "geometries"), "*.json", SearchOption.AllDirectories)
-            .Where(p => !p.Contains(sep + "invalid" + sep, StringComparison.Ordinal))
-            .Order(StringComparer.Ordinal).ToArray();
     }
 
     private static string LoadAverage()

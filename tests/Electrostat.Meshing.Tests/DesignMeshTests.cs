@@ -5,17 +5,9 @@ namespace Electrostat.Meshing.Tests;
 
 public class DesignMeshTests
 {
-    private static string GeometriesFolder()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !Directory.Exists(Path.Combine(dir.FullName, "geometries"))) dir = dir.Parent;
-        Assert.NotNull(dir);
-        return Path.Combine(dir!.FullName, "geometries");
-    }
-
     public static IEnumerable<object[]> Examples() =>
-        Directory.GetFiles(GeometriesFolder(), "*.json", SearchOption.AllDirectories)
-            .Select(f => Path.GetRelativePath(GeometriesFolder(), f))
+        Directory.GetFiles(RepoPaths.Geometries, "*.json", SearchOption.AllDirectories)
+            .Select(f => Path.GetRelativePath(RepoPaths.Geometries, f))
             .Where(f => !f.StartsWith("invalid", StringComparison.Ordinal))
             .Order(StringComparer.Ordinal)
             .Select(f => new object[] { f });
@@ -24,7 +16,7 @@ public class DesignMeshTests
     [MemberData(nameof(Examples))]
     public void Example_MeshesValidatesAndMeetsBound(string file)
     {
-        var load = DesignLoader.Load(Path.Combine(GeometriesFolder(), file));
+        var load = DesignLoader.Load(Path.Combine(RepoPaths.Geometries, file));
         Assert.False(load.HasErrors, string.Join("; ", load.Errors));
         var design = load.Design!;
         var (input, result) = DesignMesher.Generate(design, new MeshOptions { MaxEdgeLengthMetres = design.Bounds.Diagonal / 40 });

@@ -8,7 +8,7 @@ namespace Electrostat.Analysis.Tests.Adaptivity;
 /// <summary>Loads designs from geometries/ and runs the adaptive loop on them.</summary>
 internal static class AdaptiveTestSupport
 {
-    public static string Root { get; } = FindRoot();
+    public static string Root => RepoPaths.Root;
 
     public static Design Load(string relativePath)
     {
@@ -23,10 +23,4 @@ internal static class AdaptiveTestSupport
         return AdaptiveSolver.Run(design, input, mesh, options);
     }
 
-    private static string FindRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "Electrostat.sln"))) dir = dir.Parent;
-        return dir?.FullName ?? throw new InvalidOperationException("repository root not found");
-    }
 }

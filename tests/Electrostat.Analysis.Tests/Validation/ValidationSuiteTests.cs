@@ -15,7 +15,7 @@ public class ValidationSuiteTests(ITestOutputHelper output)
     [Fact]
     public void EveryCase_WithinTolerance_AndEstimatesBracketSmoothCases()
     {
-        var rows = ValidationRunner.Run(Path.Combine(FindRoot(), "geometries", "validation"), accuracy: AccuracyLevel.Normal);
+        var rows = ValidationRunner.Run(Path.Combine(RepoPaths.Geometries, "validation"), accuracy: AccuracyLevel.Normal);
         foreach (var r in rows)
             output.WriteLine($"{r.Case.Name}: ref {r.Case.ReferenceValue:G6}, ours {r.Measurement?.Value:G6}, err {r.RelativeError:P3}, est {r.Measurement?.EstimatedRelativeError:P3} {r.Failure}");
         Assert.All(rows, r => Assert.Null(r.Failure));
@@ -27,7 +27,7 @@ public class ValidationSuiteTests(ITestOutputHelper output)
     [Fact]
     public void EveryCaseDesignFileExists()
     {
-        string folder = Path.Combine(FindRoot(), "geometries", "validation");
+        string folder = Path.Combine(RepoPaths.Geometries, "validation");
         Assert.All(ValidationSuite.DesignFiles, f => Assert.True(File.Exists(Path.Combine(folder, f)), f));
     }
 
@@ -41,12 +41,5 @@ public class ValidationSuiteTests(ITestOutputHelper output)
         var under = new ValidationRow(c, new ValidationMeasurement(c.ReferenceValue * 1.004, 0.001), 1, 0, null);
         Assert.True(under.WithinTolerance);
         Assert.False(under.EstimateBrackets);
-    }
-
-    private static string FindRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "Electrostat.sln"))) dir = dir.Parent;
-        return dir?.FullName ?? throw new InvalidOperationException("repository root not found");
     }
 }

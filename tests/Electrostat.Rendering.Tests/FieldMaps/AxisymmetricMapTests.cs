@@ -7,20 +7,10 @@ namespace Electrostat.Rendering.Tests.FieldMaps;
 
 public class AxisymmetricMapTests
 {
-    private static string RepoFile(string relative)
-    {
-        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
-        {
-            string p = Path.Combine(dir.FullName, relative);
-            if (File.Exists(p)) return p;
-        }
-        throw new FileNotFoundException("not found above the test folder", relative);
-    }
-
     [Fact]
     public void MirroredSection_IsTheMirrorImageAboutTheAxis()
     {
-        string json = File.ReadAllText(RepoFile(Path.Combine("geometries", "feedthrough-axisymmetric.json")));
+        string json = File.ReadAllText(RepoPaths.File(Path.Combine("geometries", "feedthrough-axisymmetric.json")));
         var (ctx, _) = Designs.Solve(json, new MeshOptions());
         var report = DesignAnalyzer.Analyze(ctx);
         var full = FieldMapRenderer.Render(ctx, report.HotSpots, new FieldMapOptions { MirrorAxisymmetric = true, Title = ctx.Design.Title });
