@@ -23,12 +23,24 @@ internal static class CapacitanceCalculator
         if (n == 0) throw new FieldProblemException("The problem has no conductors other than the enclosure, so it has no capacitance matrix: add a conductor.");
         var sys = solver.AllFixedSystem();
         var raw = new double[n, n];
-        var reports = new List<SolveReport>(n);
+        var reportArray = new SolveReport[n];
         double energyMismatch = 0;
         var v = new double[cp.TerminalCount];
         var noCharge = new double[n];
+        var design = solver.LastDesignSolution;
+        int derived = SuperposedColumn(cp, design, out double vRef, out double[] vt);
+        var columns = derived >= 0 ? new double[n][] : null;
+        void Measure(int j, double[] phi, SolveReport report, Stopwatch sw)
+        {
+            var q = SystemAssembler.TerminalCharges(cp, phi, includeVolumeCharge: false);
+            for (int i = 0; i < n; i++) raw[i, j] = q[i];
+            double w = SystemAssembler.Energy(cp, phi);
+            energyMismatch = Math.Max(energyMismatch, q[j] != 0 ? Math.Abs(2 * w - q[j]) / Math.Abs(q[j]) : (w == 0 ? 0 : double.PositiveInfinity));
+            reportArray[j] = report with { SolveSeconds = report.SolveSeconds + sw.Elapsed.TotalSeconds };
+        }
         for (int j = 0; j < n; j++)
         {
+            if (j == derived) continue;
             var sw = Stopwatch.StartNew();
             Array.Clear(v);
             v[j] = 1.0;
@@ -37,12 +49,38 @@ internal static class CapacitanceCalculator
             var report = sys.Solve(b, u, sw.Elapsed.TotalSeconds);
             sw.Restart();
             var phi = SystemAssembler.Expand(sys.Map, u, v);
-            var q = SystemAssembler.TerminalCharges(cp, phi, includeVolumeCharge: false);
-            for (int i = 0; i < n; i++) raw[i, j] = q[i];
-            double w = SystemAssembler.Energy(cp, phi);
-            energyMismatch = Math.Max(energyMismatch, q[j] != 0 ? Math.Abs(2 * w - q[j]) / Math.Abs(q[j]) : (w == 0 ? 0 : double.PositiveInfinity));
-            reports.Add(report with { SolveSeconds = report.SolveSeconds + sw.Elapsed.TotalSeconds });
+            if (columns is not null) columns[j] = phi;
+            Measure(j, phi, report, sw);
         }
+        if (derived >= 0)
+        {
+            // φ_design = V_ref + Σ_k (V_k − V_ref)·φ_k (linearity; floating conductors enter with their solved
+            // potentials, because the Dirichlet problem with those terminal values has the design field as its
+            // solution), solved here for the one column not computed.
+            var sw = Stopwatch.StartNew();
+            var phiDesign = design!.PotentialVolts;
+            var phi = new double[phiDesign.Length];
+            double scale = 1 / (vt[derived] - vRef);
+            for (int i = 0; i < phi.Length; i++)
+            {
+                double s = phiDesign[i] - vRef;
+                for (int j = 0; j < n; j++)
+                {
+                    if (j != derived) s -= (vt[j] - vRef) * columns![j][i];
+                }
+                phi[i] = s * scale;
+            }
+            var report = design.Report with
+            {
+                Iterations = 0,
+                AssemblySeconds = 0,
+                PreconditionerSetupSeconds = 0,
+                SolveSeconds = 0,
+                Preconditioner = "superposition of the design solution",
+            };
+            Measure(derived, phi, report, sw);
+        }
+        var reports = reportArray.ToList();
 
         var maxwell = new double[n, n];
         double maxDiag = 0, maxAsym = 0;
@@ -70,6 +108,43 @@ internal static class CapacitanceCalculator
         }
         var reduced = Reduce(cp, maxwell, names);
         return new CapacitanceMatrixResult(cp.Symmetry, cp.Problem.DepthMetres, names, raw, maxwell, symmetryError, energyMismatch, reports, reduced, eig, violations);
+    }
+
+    /// <summary>
+    /// The column that can be taken from the design solution by superposition, or −1: the design must have been
+    /// solved on this problem and converged, carry no volume charge (whose particular solution is not a combination of
+    /// the columns), and have one reference potential V_ref for the enclosure and the point at infinity. Returns the
+    /// terminal farthest from V_ref (best conditioned) and every terminal's design potential.
+    /// </summary>
+    private static int SuperposedColumn(CompiledProblem cp, FieldSolution? design, out double vRef, out double[] vt)
+    {
+        var problem = cp.Problem;
+        int n = cp.ConductorCount;
+        vRef = 0;
+        vt = new double[n];
+        if (design is null || !ReferenceEquals(design.Problem, problem) || !design.Report.Converged) return -1;
+        if (problem.Materials.Values.Any(m => m.ChargeDensityCoulombsPerCubicMetre != 0)) return -1;
+        var walls = problem.Boundaries.Values.OfType<Problem.EnclosureBoundary>().Select(e => e.PotentialVolts).Distinct().ToList();
+        if (walls.Count > 1) return -1;
+        bool infinityHeld = problem.OpenBoundary is not null && problem.Symmetry == Problem.ProblemSymmetry.Axisymmetric;
+        if (walls.Count == 1) vRef = walls[0];
+        if (infinityHeld)
+        {
+            double vInf = problem.OpenBoundary!.PotentialAtInfinityVolts;
+            if (walls.Count == 1 && vInf != vRef) return -1;
+            vRef = vInf;
+        }
+        int best = -1;
+        double bestGap = 0;
+        for (int k = 0; k < n; k++)
+        {
+            var def = problem.Conductors[k];
+            vt[k] = def.IsFloating ? design.Conductors[k].PotentialVolts : def.PotentialVolts;
+            if (!double.IsFinite(vt[k])) return -1;
+            double gap = Math.Abs(vt[k] - vRef);
+            if (gap > bestGap) { bestGap = gap; best = k; }
+        }
+        return best;
     }
 
     private static List<string> Check(double[,] c, string[] names, double[] eig, double maxDiag, bool hasReference)

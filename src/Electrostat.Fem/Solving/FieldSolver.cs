@@ -23,6 +23,10 @@ public sealed class FieldSolver
     private LinearSystem? _designSystem;
     private LinearSystem? _allFixedSystem;
 
+    /// <summary>The latest <see cref="Solve"/> result, which <see cref="ComputeCapacitanceMatrix"/> reuses as one of
+    /// its columns by superposition (see <see cref="CapacitanceMatrixResult"/>); null before the first solve.</summary>
+    internal FieldSolution? LastDesignSolution { get; private set; }
+
     /// <summary>Validates and prepares the problem.</summary>
     /// <param name="problem">The field problem.</param>
     /// <param name="options">Solver options; defaults when null.</param>
@@ -104,12 +108,16 @@ public sealed class FieldSolver
         var ey = new double[mesh.TriangleCount];
         double energy = SystemAssembler.Energy(_cp, phi, ex, ey);
         report = report with { SolveSeconds = report.SolveSeconds + sw.Elapsed.TotalSeconds };
-        return new FieldSolution(_cp.Problem, phi, ex, ey, conductors, q[_cp.EnclosureTerminal], q[_cp.InfinityTerminal], energy, report);
+        var solution = new FieldSolution(_cp.Problem, phi, ex, ey, conductors, q[_cp.EnclosureTerminal], q[_cp.InfinityTerminal], energy, report);
+        LastDesignSolution = solution;
+        return solution;
     }
 
     /// <summary>
     /// Computes the Maxwell capacitance matrix with every conductor as a terminal (floating ones included), from one
     /// solve per conductor sharing one matrix and one preconditioner; see <see cref="CapacitanceMatrixResult"/>.
+    /// After <see cref="Solve"/>, one column comes from the design solution by superposition instead of a solve, when
+    /// the problem is linear and homogeneous in the terminal potentials (no volume charge, one reference potential).
     /// </summary>
     public CapacitanceMatrixResult ComputeCapacitanceMatrix() => CapacitanceCalculator.Compute(this);
 

@@ -72,6 +72,53 @@ public class CapacitanceMatrixTests
         Assert.Equal(1, sol.TotalEnergyJoules / (sol.EnergyJoules * 0.2), 12);
     }
 
+    [Theory]
+    [InlineData(null, 0.0)]
+    [InlineData(2e-10, 0.0)]
+    [InlineData(null, 30.0)]
+    [InlineData(-1e-10, -12.5)]
+    public void AfterADesignSolve_OneColumnComesBySuperposition_AndTheMatrixIsUnchanged(double? floatingCharge, double wallVolts)
+    {
+        // φ_design = V_ref + Σ (V_k − V_ref)·φ_k for a linear problem without volume charge (superposition), so the
+        // column of the terminal farthest from the wall potential needs no solve. The matrix must equal the one
+        // computed from N solves, with a floating conductor (at its solved potential) and with the wall at ≠ 0 V.
+        ElectrostaticProblem Problem()
+        {
+            var p = ThreeElectrodes(floatingCharge);
+            var roles = p.Boundaries.ToDictionary(kv => kv.Key, kv => kv.Value is EnclosureBoundary ? Enclosure(wallVolts) : kv.Value);
+            return p with { Boundaries = roles };
+        }
+        var reference = new FieldSolver(Problem()).ComputeCapacitanceMatrix();
+        var solver = new FieldSolver(Problem());
+        solver.Solve();
+        var reused = solver.ComputeCapacitanceMatrix();
+        Assert.Equal(1, reused.ColumnReports.Count(r => r.Preconditioner.StartsWith("superposition", StringComparison.Ordinal)));
+        Assert.Equal(1, reused.ColumnReports.Count(r => r.Iterations == 0));
+        for (int i = 0; i < 3; i++)
+        {
+            for (int j = 0; j < 3; j++)
+            {
+                double scale = Math.Sqrt(reference.Maxwell[i, i] * reference.Maxwell[j, j]);
+                Assert.True(Math.Abs(reused.Maxwell[i, j] - reference.Maxwell[i, j]) < 1e-7 * scale,
+                    $"C[{i},{j}] {reused.Maxwell[i, j]:E8} against {reference.Maxwell[i, j]:E8}");
+            }
+        }
+        Assert.True(reused.EnergyMismatch < 1e-7, $"energy mismatch {reused.EnergyMismatch:E2}");
+        Assert.True(reused.SymmetryError < 1e-7, $"symmetry error {reused.SymmetryError:E2}");
+    }
+
+    [Fact]
+    public void VolumeCharge_KeepsEveryColumnSolved()
+    {
+        // With a volume charge the design field is not a combination of the columns: no superposition.
+        var p = ThreeElectrodes();
+        p = p with { Materials = new Dictionary<int, RegionMaterial> { [1] = RegionMaterial.Dielectric(4.4) with { ChargeDensityCoulombsPerCubicMetre = 1e-4 }, [2] = RegionMaterial.Vacuum } };
+        var solver = new FieldSolver(p);
+        solver.Solve();
+        var cm = solver.ComputeCapacitanceMatrix();
+        Assert.All(cm.ColumnReports, r => Assert.True(r.Iterations > 0));
+    }
+
     [Fact]
     public void FloatingConductor_ReducedMatrixPredictsTheDesignSolve()
     {
