@@ -8,7 +8,7 @@ using Electrostat.Numerics.Sparse;
 namespace Electrostat.Bench;
 
 /// <summary>
-/// Suite "amg": the numerics layer alone on a generated P1 Laplace problem (see <see cref="AmgBenchProblem"/>).
+/// Suite "amg": the numerics layer alone on a generated P1 Laplace problem (see <see cref="JitteredSquare"/>).
 /// Per case: symbolic + numeric assembly, AMG setup, PCG to 1e-10 relative residual from zero, then one more
 /// right-hand side with the same hierarchy. Times are medians over the repeats.
 /// Options: <c>--cells 126,251,501,1001</c> (cells per side; unknowns = (cells − 1)²), <c>--repeat 5</c>, and the
@@ -62,7 +62,7 @@ internal sealed class AmgBench : IBenchSuite
         bool allConverged = true;
         foreach (int m in cells)
         {
-            var problem = AmgBenchProblem.Create(m, shuffle: shuffle);
+            var problem = JitteredSquare.Create(m, shuffle: shuffle);
             var b1 = problem.UnitLoad();
             var rng = new Random(7);
             var b2 = new double[problem.DofCount];
@@ -107,25 +107,14 @@ internal sealed class AmgBench : IBenchSuite
                 hierarchy = $"levels={amg.Stats.Levels.Count} operator_complexity={amg.Stats.OperatorComplexity.ToString("F3", CultureInfo.InvariantCulture)} final_residual={report.FinalRelativeResidual.ToString("E2", CultureInfo.InvariantCulture)}";
             }
             double peakMb = Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024.0);
-            double asm = Median(assembly), set = Median(setup), sol = Median(solve), ext = Median(extra);
+            double asm = BenchProcess.Median(assembly), set = BenchProcess.Median(setup), sol = BenchProcess.Median(solve), ext = BenchProcess.Median(extra);
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"amg case=p1-square-{m}{(shuffle ? "-shuffled" : "")}{(renumber ? "-rcm" : "")} unknowns={problem.DofCount} iterations={iterations} setup_seconds={set:F3} solve_seconds={sol:F3} extra_rhs_seconds={ext:F3} peak_mb={peakMb:F0} assembly_seconds={asm:F3} total_seconds={asm + set + sol:F3} cpu_seconds={Median(cpu):F3} load={Environment.ProcessorCount}cpu/{LoadAverage()} extra_rhs_iterations={extraIterations} {hierarchy}"));
+                $"amg case=p1-square-{m}{(shuffle ? "-shuffled" : "")}{(renumber ? "-rcm" : "")} unknowns={problem.DofCount} iterations={iterations} setup_seconds={set:F3} solve_seconds={sol:F3} extra_rhs_seconds={ext:F3} peak_mb={peakMb:F0} assembly_seconds={asm:F3} total_seconds={asm + set + sol:F3} cpu_seconds={BenchProcess.Median(cpu):F3} load={Environment.ProcessorCount}cpu/{BenchProcess.LoadAverage()} extra_rhs_iterations={extraIterations} {hierarchy}"));
         }
         return allConverged ? 0 : 1;
     }
 
     /// <summary>The 1-minute load average (Linux), to show whether other processes shared the cores.</summary>
-    private static string LoadAverage()
-    {
-        try
-        {
-            return File.ReadAllText("/proc/loadavg").Split(' ')[0];
-        }
-        catch (IOException)
-        {
-            return "unknown";
-        }
-    }
 
     private static double[] Renumbered(double[] b, int[] oldMap, int[] newMap)
     {
@@ -138,11 +127,5 @@ internal sealed class AmgBench : IBenchSuite
             }
         }
         return r;
-    }
-
-    private static double Median(List<double> values)
-    {
-        var s = values.Order().ToArray();
-        return s.Length % 2 == 1 ? s[s.Length / 2] : 0.5 * (s[s.Length / 2 - 1] + s[s.Length / 2]);
     }
 }

@@ -59,33 +59,9 @@ internal sealed class ExampleBench : IBenchSuite
         var a = outcome.Adaptive;
         string name = Path.GetFileNameWithoutExtension(path);
         Console.Error.WriteLine(FormattableString.Invariant(
-            $"# examples case={name} cold_seconds={coldSeconds:F3} cpu_seconds={cpu:F3} final_solve_seconds={a.FinalSolveSeconds:F3} converged={a.Converged} load_avg={LoadAverage()}"));
+            $"# examples case={name} cold_seconds={coldSeconds:F3} cpu_seconds={cpu:F3} final_solve_seconds={a.FinalSolveSeconds:F3} converged={a.Converged} load_avg={BenchProcess.LoadAverage()}"));
         Console.WriteLine(FormattableString.Invariant(
-            $"examples case={name} triangles={a.Mesh.Mesh.TriangleCount} levels={a.Levels.Count} seconds={seconds:F3} adapt_overhead={a.AdaptOverhead:F2} peak_mb={PeakMegabytes():F0}"));
+            $"examples case={name} triangles={a.Mesh.Mesh.TriangleCount} levels={a.Levels.Count} seconds={seconds:F3} adapt_overhead={a.AdaptOverhead:F2} peak_mb={BenchProcess.PeakMegabytes():F0}"));
         return 0;
-    }
-
-    private static string LoadAverage()
-    {
-        try
-        {
-            return File.ReadAllText("/proc/loadavg").Split(' ')[0];
-        }
-        catch (IOException)
-        {
-            return "n/a";
-        }
-    }
-
-    private static double PeakMegabytes()
-    {
-        try
-        {
-            foreach (string line in File.ReadLines("/proc/self/status"))
-                if (line.StartsWith("VmHWM:", StringComparison.Ordinal))
-                    return double.Parse(line[6..].Trim().Split(' ')[0], CultureInfo.InvariantCulture) / 1024.0;
-        }
-        catch (IOException) { }
-        return GC.GetGCMemoryInfo().TotalCommittedBytes / 1048576.0;
     }
 }

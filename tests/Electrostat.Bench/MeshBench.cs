@@ -88,22 +88,11 @@ internal sealed class MeshBench : IBenchSuite
         // CPU time of the process (all threads) tells the cost when other work shares the machine; stderr keeps stdout to the agreed format.
         Console.Error.WriteLine(FormattableString.Invariant($"# mesh case={name} cpu_seconds={cpu[2]:F3} wall_seconds_min={times[0]:F3} wall_seconds_max={times[4]:F3}"));
         Console.WriteLine(FormattableString.Invariant(
-            $"mesh case={name} triangles={last!.Mesh.TriangleCount} min_angle_deg={last.Quality.MinAngleDegrees:F2} seconds={times[2]:F3} peak_mb={PeakMegabytes():F0}"));
+            $"mesh case={name} triangles={last!.Mesh.TriangleCount} min_angle_deg={last.Quality.MinAngleDegrees:F2} seconds={times[2]:F3} peak_mb={BenchProcess.PeakMegabytes():F0}"));
         return 0;
     }
 
     /// <summary>Peak resident set size of this process, MB (VmHWM), or the GC's total committed bytes if /proc is unavailable.</summary>
-    private static double PeakMegabytes()
-    {
-        try
-        {
-            foreach (string line in File.ReadLines("/proc/self/status"))
-                if (line.StartsWith("VmHWM:", StringComparison.Ordinal))
-                    return double.Parse(line[6..].Trim().Split(' ')[0], CultureInfo.InvariantCulture) / 1024.0;
-        }
-        catch (IOException) { }
-        return GC.GetGCMemoryInfo().TotalCommittedBytes / 1048576.0;
-    }
 
     /// <summary>
     /// A 100 mm × 60 mm enclosure (tag 1) holding a dielectric slab (region 2, interface tag 5), a bar electrode with

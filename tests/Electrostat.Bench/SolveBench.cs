@@ -56,7 +56,7 @@ internal sealed class SolveBench : IBenchSuite
         {
             var problem = create();
             GC.Collect();
-            ResetPeak();
+            BenchProcess.ResetPeak();
             var first = new List<double>();
             var firstCpu = new List<double>();
             var extra = new List<double>();
@@ -85,62 +85,12 @@ internal sealed class SolveBench : IBenchSuite
                 cap = cm.Maxwell[0, 0];
                 ok &= sol.Report.Converged && cm.ColumnReports.All(c => c.Converged) && cm.PassesPhysicsChecks;
             }
-            double peakMb = PeakMegabytes();
+            double peakMb = BenchProcess.PeakMegabytes();
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"solve case={name} unknowns={report!.Unknowns} iterations={report.Iterations} seconds={Median(first):F3} extra_rhs_seconds={Median(extra):F3} capacitance_per_terminal_seconds={Median(perTerminal):F3} peak_mb={peakMb:F0} cpu_seconds={Median(firstCpu):F3} load_average={LoadAverage()} assembly_seconds={report.AssemblySeconds:F3} setup_seconds={report.PreconditionerSetupSeconds:F3} cg_seconds={report.SolveSeconds:F3} residual={report.RelativeResidual:E2} c11={cap:E6}"));
+                $"solve case={name} unknowns={report!.Unknowns} iterations={report.Iterations} seconds={BenchProcess.Median(first):F3} extra_rhs_seconds={BenchProcess.Median(extra):F3} capacitance_per_terminal_seconds={BenchProcess.Median(perTerminal):F3} peak_mb={peakMb:F0} cpu_seconds={BenchProcess.Median(firstCpu):F3} load_average={BenchProcess.LoadAverage()} assembly_seconds={report.AssemblySeconds:F3} setup_seconds={report.PreconditionerSetupSeconds:F3} cg_seconds={report.SolveSeconds:F3} residual={report.RelativeResidual:E2} c11={cap:E6}"));
         }
         return ok ? 0 : 1;
     }
 
-    private static void ResetPeak()
-    {
-        // Writing 5 to clear_refs resets the peak resident set size (Linux proc(5)); elsewhere the peak is cumulative.
-        try
-        {
-            File.WriteAllText("/proc/self/clear_refs", "5");
-        }
-        catch (IOException)
-        {
-        }
-        catch (UnauthorizedAccessException)
-        {
-        }
-    }
-
-    private static double PeakMegabytes()
-    {
-        try
-        {
-            foreach (var line in File.ReadLines("/proc/self/status"))
-            {
-                if (line.StartsWith("VmHWM:", StringComparison.Ordinal))
-                {
-                    return double.Parse(line[6..].Trim().Split(' ')[0], CultureInfo.InvariantCulture) / 1024.0;
-                }
-            }
-        }
-        catch (IOException)
-        {
-        }
-        return Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024.0);
-    }
-
     /// <summary>The 1-minute load average (Linux), to tell a contended machine from a slow solver.</summary>
-    private static string LoadAverage()
-    {
-        try
-        {
-            return File.ReadAllText("/proc/loadavg").Split(' ')[0];
-        }
-        catch (IOException)
-        {
-            return "na";
-        }
-    }
-
-    private static double Median(List<double> values)
-    {
-        var s = values.Order().ToArray();
-        return s.Length % 2 == 1 ? s[s.Length / 2] : 0.5 * (s[s.Length / 2 - 1] + s[s.Length / 2]);
-    }
 }

@@ -36,77 +36,19 @@ internal static class TestProblems
     /// <summary>As <see cref="JitteredP1(int, int)"/> for −∇·(ε∇u) with ε(x, y) evaluated at each triangle's centroid.</summary>
     public static CsrMatrix JitteredP1(int m, int seed, Func<double, double, double> coefficient)
     {
-        int nodes = (m + 1) * (m + 1);
-        var x = new double[nodes];
-        var y = new double[nodes];
-        var dof = new int[nodes];
-        var rng = new Random(seed);
-        double h = 1.0 / m;
-        int count = 0;
-        for (int j = 0; j <= m; j++)
-        {
-            for (int i = 0; i <= m; i++)
-            {
-                int n = j * (m + 1) + i;
-                bool boundary = i == 0 || j == 0 || i == m || j == m;
-                x[n] = i * h + (boundary ? 0 : (rng.NextDouble() - 0.5) * 0.4 * h);
-                y[n] = j * h + (boundary ? 0 : (rng.NextDouble() - 0.5) * 0.4 * h);
-                dof[n] = boundary ? -1 : count++;
-            }
-        }
-        var tri = StructuredTriangles(m);
-        var plan = CsrAssemblyPlan.Create(tri, 3, dof, count);
+        var mesh = JitteredSquare.Create(m, seed);
+        var (x, y, tri) = (mesh.X, mesh.Y, mesh.Triangles);
+        var plan = CsrAssemblyPlan.Create(tri, 3, mesh.DofOfNode, mesh.DofCount);
         return plan.Assemble((e, k) =>
         {
             var nodes = tri.AsSpan(3 * e, 3);
-            P1Stiffness(x, y, nodes, k);
+            JitteredSquare.P1Stiffness(x, y, nodes, k);
             double eps = coefficient((x[nodes[0]] + x[nodes[1]] + x[nodes[2]]) / 3, (y[nodes[0]] + y[nodes[1]] + y[nodes[2]]) / 3);
             for (int q = 0; q < 9; q++)
             {
                 k[q] *= eps;
             }
         });
-    }
-
-    /// <summary>Triangles of an m × m cell grid with nodes j·(m+1)+i, alternating diagonals.</summary>
-    public static int[] StructuredTriangles(int m, bool alternate = true)
-    {
-        var tri = new int[m * m * 6];
-        int t = 0;
-        for (int j = 0; j < m; j++)
-        {
-            for (int i = 0; i < m; i++)
-            {
-                int n00 = j * (m + 1) + i, n10 = n00 + 1, n01 = n00 + m + 1, n11 = n01 + 1;
-                if (!alternate || ((i + j) & 1) == 0)
-                {
-                    tri[t++] = n00; tri[t++] = n10; tri[t++] = n11;
-                    tri[t++] = n00; tri[t++] = n11; tri[t++] = n01;
-                }
-                else
-                {
-                    tri[t++] = n00; tri[t++] = n10; tri[t++] = n01;
-                    tri[t++] = n10; tri[t++] = n11; tri[t++] = n01;
-                }
-            }
-        }
-        return tri;
-    }
-
-    /// <summary>P1 stiffness K_ab = area·∇φ_a·∇φ_b of one triangle, row-major 3 × 3.</summary>
-    public static void P1Stiffness(double[] x, double[] y, ReadOnlySpan<int> nodes, Span<double> k)
-    {
-        int a = nodes[0], b = nodes[1], c = nodes[2];
-        double twiceArea = (x[b] - x[a]) * (y[c] - y[a]) - (x[c] - x[a]) * (y[b] - y[a]);
-        Span<double> gx = [y[b] - y[c], y[c] - y[a], y[a] - y[b]];
-        Span<double> gy = [x[c] - x[b], x[a] - x[c], x[b] - x[a]];
-        for (int p = 0; p < 3; p++)
-        {
-            for (int q = 0; q < 3; q++)
-            {
-                k[3 * p + q] = (gx[p] * gx[q] + gy[p] * gy[q]) / (2 * twiceArea);
-            }
-        }
     }
 
     /// <summary>A random SPD matrix BᵀB + n·I with a random sparsity pattern (seeded), as CSR.</summary>

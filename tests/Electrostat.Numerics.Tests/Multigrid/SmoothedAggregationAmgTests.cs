@@ -136,8 +136,8 @@ public class SmoothedAggregationAmgTests
                 y[j * (m + 1) + i] = (double)j / m;
             }
         }
-        var tri = TestProblems.StructuredTriangles(m);
-        var a = CsrAssemblyPlan.Create(tri, 3, x.Length).Assemble((e, k) => TestProblems.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
+        var tri = JitteredSquare.StructuredTriangles(m);
+        var a = CsrAssemblyPlan.Create(tri, 3, x.Length).Assemble((e, k) => JitteredSquare.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
         var amg = SmoothedAggregationAmg.Build(a, new AmgOptions { CoarsestRows = 50 });
         Assert.Equal("pseudo-inverse", amg.Stats.CoarsestSolver);
         var b = TestProblems.RandomVector(a.Rows, 3);
@@ -202,8 +202,8 @@ public class SmoothedAggregationAmgTests
                 dof[n] = boundary ? -1 : inside ? 0 : count++;
             }
         }
-        var tri = TestProblems.StructuredTriangles(m);
-        var a = CsrAssemblyPlan.Create(tri, 3, dof, count).Assemble((e, k) => TestProblems.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
+        var tri = JitteredSquare.StructuredTriangles(m);
+        var a = CsrAssemblyPlan.Create(tri, 3, dof, count).Assemble((e, k) => JitteredSquare.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
         Assert.True(a.RowPointers[1] - a.RowPointers[0] > 30);
         var b = TestProblems.RandomVector(count, 5);
         var amg = SmoothedAggregationAmg.Build(a, new AmgOptions { CoarsestRows = 30 });

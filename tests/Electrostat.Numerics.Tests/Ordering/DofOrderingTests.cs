@@ -40,20 +40,8 @@ public class DofOrderingTests
     public void DofMapRenumbering_KeepsMergingAndElimination_AndRestoresFastConvergence()
     {
         int m = 60;
-        var x = new double[(m + 1) * (m + 1)];
-        var y = new double[x.Length];
-        var dof = new int[x.Length];
-        int count = 0;
-        for (int j = 0; j <= m; j++)
-        {
-            for (int i = 0; i <= m; i++)
-            {
-                int n = j * (m + 1) + i;
-                x[n] = (double)i / m;
-                y[n] = (double)j / m;
-                dof[n] = i == 0 || j == 0 || i == m || j == m ? -1 : count++;
-            }
-        }
+        var grid = JitteredSquare.Create(m, jitter: 0);
+        var (x, y, dof, count) = (grid.X, grid.Y, grid.DofOfNode, grid.DofCount);
         // Merge two nodes into one dof, then shuffle the dof numbers.
         int merged = dof[(m / 2) * (m + 1) + m / 2];
         dof[(m / 2) * (m + 1) + m / 2 + 1] = merged;
@@ -70,7 +58,7 @@ public class DofOrderingTests
             dof[n] = dof[n] < 0 ? -1 : compact[dof[n]];
         }
         count = used.Length;
-        var tri = TestProblems.StructuredTriangles(m);
+        var tri = JitteredSquare.StructuredTriangles(m);
         var renumbered = DofOrdering.ReverseCuthillMcKee(tri, 3, dof, count);
         for (int n = 0; n < dof.Length; n++)
         {
@@ -79,7 +67,7 @@ public class DofOrderingTests
         Assert.Equal(renumbered[(m / 2) * (m + 1) + m / 2], renumbered[(m / 2) * (m + 1) + m / 2 + 1]);
         Assert.Equal(count, renumbered.Where(d => d >= 0).Distinct().Count());
 
-        var a = CsrAssemblyPlan.Create(tri, 3, renumbered, count).Assemble((e, k) => TestProblems.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
+        var a = CsrAssemblyPlan.Create(tri, 3, renumbered, count).Assemble((e, k) => JitteredSquare.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
         var report = ConjugateGradient.Solve(a, TestProblems.RandomVector(count, 1), new double[count], SmoothedAggregationAmg.Build(a));
         Assert.True(report.Converged && report.Iterations <= 20, report.ToString());
     }

@@ -14,23 +14,11 @@ public class CsrAssemblyPlanTests
         // exactly: the diagonal couplings cancel. (Strang and Fix, "An Analysis of the Finite Element Method",
         // 1973, §1.3 — section number from memory.)
         int m = 9;
-        var x = new double[(m + 1) * (m + 1)];
-        var y = new double[x.Length];
-        var dof = new int[x.Length];
-        int count = 0;
-        for (int j = 0; j <= m; j++)
-        {
-            for (int i = 0; i <= m; i++)
-            {
-                int n = j * (m + 1) + i;
-                x[n] = (double)i / m;
-                y[n] = (double)j / m;
-                dof[n] = i == 0 || j == 0 || i == m || j == m ? -1 : count++;
-            }
-        }
-        var tri = TestProblems.StructuredTriangles(m, alternate);
-        var plan = CsrAssemblyPlan.Create(tri, 3, dof, count);
-        var a = plan.Assemble((e, k) => TestProblems.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
+        var grid = JitteredSquare.Create(m, jitter: 0);
+        var (x, y) = (grid.X, grid.Y);
+        var tri = JitteredSquare.StructuredTriangles(m, alternate);
+        var plan = CsrAssemblyPlan.Create(tri, 3, grid.DofOfNode, grid.DofCount);
+        var a = plan.Assemble((e, k) => JitteredSquare.P1Stiffness(x, y, tri.AsSpan(3 * e, 3), k));
         a.Validate();
         var expected = TestProblems.FivePoint(m - 1).ToDense();
         Assert.True((a.ToDense() - expected).InfinityNorm() < 1e-13);
