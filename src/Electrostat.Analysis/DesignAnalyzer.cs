@@ -24,14 +24,16 @@ public static class DesignAnalyzer
     /// <summary>Runs every analysis.</summary>
     /// <param name="context">The solved design.</param>
     /// <param name="options">Options; null for defaults.</param>
-    public static AnalysisReport Analyze(AnalysisContext context, AnalysisOptions? options = null)
+    /// <param name="measuredPeaks">The final adaptive level's peaks, which the margins then use (see
+    /// <see cref="MarginChecker"/>); null to take them from the recovered field.</param>
+    public static AnalysisReport Analyze(AnalysisContext context, AnalysisOptions? options = null, IReadOnlyList<Adaptivity.MaterialPeak>? measuredPeaks = null)
     {
         ArgumentNullException.ThrowIfNull(context);
         options ??= new AnalysisOptions();
         var corners = SingularCornerDetector.Detect(context);
         var hotSpots = HotSpotFinder.Find(context, corners, options.HotSpots);
         var profiles = SurfaceFieldProfiler.Profile(context);
-        var margins = MarginChecker.Check(context, corners);
+        var margins = MarginChecker.Check(context, corners, measuredPeaks);
         var clearances = ClearanceAnalyzer.Analyze(context, options.PcbSpacingCategory);
         var forces = ForceCalculator.Compute(context);
         var warnings = new List<string>();

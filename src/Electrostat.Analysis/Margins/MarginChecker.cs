@@ -1,3 +1,4 @@
+using Electrostat.Analysis.Adaptivity;
 using Electrostat.Analysis.Corners;
 
 namespace Electrostat.Analysis.Margins;
@@ -11,13 +12,18 @@ namespace Electrostat.Analysis.Margins;
 /// given separately. A material without a breakdown field, or without a required margin, is "not checked", never
 /// passing. The requirement is the material's own <c>min_margin</c> if given, else the design's
 /// (<see cref="Geometry.Model.DesignChecks.MarginFor"/>).
+/// <para>When the adaptive loop's peaks are given (<c>solve</c> does), E_peak is taken from them, so that the margin,
+/// the reported peak with its error estimate and the field enhancement factor are one number; the recovered field is
+/// the fallback for a material without a measured peak and for a single solve.</para>
 /// </remarks>
 public static class MarginChecker
 {
     /// <summary>Computes the margins.</summary>
     /// <param name="context">The analysis context.</param>
     /// <param name="corners">Singular corners (from <see cref="SingularCornerDetector.Detect"/>).</param>
-    public static MarginReport Check(AnalysisContext context, IReadOnlyList<SingularCorner> corners)
+    /// <param name="measuredPeaks">The final adaptive level's peak per material (singular corners excluded), or null
+    /// to take the peaks from the recovered field.</param>
+    public static MarginReport Check(AnalysisContext context, IReadOnlyList<SingularCorner> corners, IReadOnlyList<MaterialPeak>? measuredPeaks = null)
     {
         ArgumentNullException.ThrowIfNull(context);
         ArgumentNullException.ThrowIfNull(corners);
@@ -49,6 +55,13 @@ public static class MarginChecker
                 if (material is null) continue;
                 double e = rec.SideMagnitude(s);
                 if (e > peaks[material.Name].Field) peaks[material.Name] = (e, x, y);
+            }
+        }
+        if (measuredPeaks is not null)
+        {
+            foreach (var p in measuredPeaks)
+            {
+                if (peaks.ContainsKey(p.MaterialName)) peaks[p.MaterialName] = (p.FieldVoltsPerMetre, p.XMetres, p.YMetres);
             }
         }
 

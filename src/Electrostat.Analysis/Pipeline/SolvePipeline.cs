@@ -61,7 +61,7 @@ public static class SolvePipeline
         var adaptive = AdaptiveSolver.Run(design, input, mesh, options, meshSeconds, cancellationToken);
         cancellationToken.ThrowIfCancellationRequested();
         var context = new AnalysisContext(design, input.Tags, input.Regions, adaptive.Solution);
-        var analysis = DesignAnalyzer.Analyze(context, analysisOptions);
+        var analysis = DesignAnalyzer.Analyze(context, analysisOptions, adaptive.Levels[^1].Peaks);
         var warnings = new List<string>();
         foreach (int e in DesignProblemBuilder.UnmeshedElectrodes(design, input.Tags))
             warnings.Add($"Electrode '{design.Electrodes[e].Name}' has no surface facing a meshed region (it lies inside another conductor); it is not a terminal.");
