@@ -9,6 +9,7 @@ internal static class StarterTemplates
         ("electrode-pair", "planar: 6 kV bar facing a grounded bar in air; margin and clearance checks"),
         ("sensor", "planar: two-pad capacitive sensor on FR-4 with a grounded target above"),
         ("axisymmetric", "axisymmetric: rod with a rounded end above a grounded plane in transformer oil"),
+        ("open-space", "axisymmetric, open space: 60 kV terminal with a grading ring above a grounded disc in air"),
     ];
 
     /// <summary>The template's text, or null for an unknown name.</summary>
