@@ -200,9 +200,15 @@ public static class ReportWriter
         if (input.Capacitance is { } cap)
         {
             string cu = planar ? "pF/m" : "pF";
+            // The reference of the row sums: the enclosure wall, or infinity in open space (free, so zero, when planar).
+            bool open = design.Enclosure.IsOpen;
+            string reference = open ? "infinity" : "the enclosure";
+            string rowSums = open && planar
+                ? "in planar open space infinity is free, so the charges sum to zero and every row sum (capacitance to infinity) is zero."
+                : $"capacitance to {reference} = row sum.";
             h.Raw("<p class=\"note\">").Text(planar
-                ? "Per metre of depth (planar). Maxwell matrix: Q_i = Σ_j C_ij V_j with the enclosure at 0 V; off-diagonal entries are negative. Mutual capacitance C_ij(mutual) = −C_ij; capacitance to the enclosure = row sum."
-                : "Totals for the body of revolution. Maxwell matrix: Q_i = Σ_j C_ij V_j with the enclosure (or infinity) at 0 V; off-diagonal entries are negative. Mutual capacitance = −C_ij; capacitance to the enclosure = row sum.").Raw("</p>");
+                ? $"Per metre of depth (planar). Maxwell matrix: Q_i = Σ_j C_ij V_j{(open ? "" : $" with {reference} at 0 V")}; off-diagonal entries are negative. Mutual capacitance C_ij(mutual) = −C_ij; {rowSums}"
+                : $"Totals for the body of revolution. Maxwell matrix: Q_i = Σ_j C_ij V_j with {reference} at 0 V; off-diagonal entries are negative. Mutual capacitance = −C_ij; {rowSums}").Raw("</p>");
             h.Raw($"<h3>Maxwell matrix ({cu})</h3><table id=\"capacitance-table\"><thead><tr><th></th>");
             foreach (var n in cap.TerminalNames) h.Raw("<th>").Text(n).Raw("</th>");
             h.Raw("</tr></thead><tbody>");
@@ -212,7 +218,8 @@ public static class ReportWriter
                 for (int j = 0; j < cap.Count; j++) h.Raw($"<td class=\"n\" data-si=\"{R(cap.Maxwell[i, j])}\">").Text(Num(cap.Maxwell[i, j] * 1e12)).Raw("</td>");
                 h.Raw("</tr>");
             }
-            h.Raw($"</tbody></table>\n<h3>Mutual and to-enclosure capacitances ({cu})</h3><table id=\"mutual-table\"><thead><tr><th>terminal</th><th>to enclosure</th>");
+            string to = open ? "infinity" : "enclosure";
+            h.Raw($"</tbody></table>\n<h3>Mutual and to-{to} capacitances ({cu})</h3><table id=\"mutual-table\"><thead><tr><th>terminal</th><th>to {to}</th>");
             foreach (var n in cap.TerminalNames) h.Raw("<th>").Text("to " + n).Raw("</th>");
             h.Raw("</tr></thead><tbody>");
             for (int i = 0; i < cap.Count; i++)
