@@ -88,6 +88,31 @@ public static class ReferenceFormulas
     /// <param name="voltageVolts">Sphere potential, volts.</param>
     public static double IsolatedSpherePeakField(double radiusMetres, double voltageVolts) => voltageVolts / radiusMetres;
 
+    /// <summary>
+    /// Capacitance coefficients of two equal spheres of radius a, centres d apart, in open space (bispherical image
+    /// series; Smythe, Static and Dynamic Electricity, 3rd ed., ch. 5; series from memory): with cosh β = d/(2a),
+    /// c11 = 4πε0 a sinh β Σ_{n≥0} 1/sinh((2n+1)β) and c12 = −4πε0 a sinh β Σ_{n≥1} 1/sinh(2nβ), F. Summed until the
+    /// terms fall below 1e-16 of the sum.
+    /// </summary>
+    /// <param name="radiusMetres">a, metres.</param>
+    /// <param name="centreDistanceMetres">d > 2a, metres.</param>
+    /// <returns>(c11, c12), F.</returns>
+    public static (double Self, double Mutual) TwoEqualSpheresCoefficients(double radiusMetres, double centreDistanceMetres)
+    {
+        double beta = Math.Acosh(centreDistanceMetres / (2 * radiusMetres));
+        double self = 0, mutual = 0;
+        for (int n = 0; n < 100_000; n++)
+        {
+            double ts = 1 / Math.Sinh((2 * n + 1) * beta);
+            double tm = n >= 1 ? 1 / Math.Sinh(2 * n * beta) : 0;
+            self += ts;
+            mutual += tm;
+            if (ts < 1e-16 * self && (n == 0 || tm < 1e-16 * mutual)) break;
+        }
+        double k = 4 * Math.PI * Eps0 * radiusMetres * Math.Sinh(beta);
+        return (k * self, -k * mutual);
+    }
+
     /// <summary>Concentric spheres: C = 4πε0 ab/(b − a), F (Griffiths, Introduction to Electrodynamics, ch. 2).</summary>
     /// <param name="innerRadiusMetres">a, metres.</param>
     /// <param name="outerRadiusMetres">b, metres.</param>

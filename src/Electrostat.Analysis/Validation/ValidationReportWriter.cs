@@ -66,7 +66,7 @@ public static class ValidationReportWriter
                       "models are multiplied back to the full line. The two-wire line is (C11·C22 − C12²)/(C11 + C22 + 2·C12), the " +
                       "capacitance for equal and opposite charges; in open space (where the charges sum to zero by themselves) it is the " +
                       "mutual capacitance −C12.");
-        sb.AppendLine("* The isolated sphere and the open two-wire line use the design file's open space (`\"open\": true`, a Kelvin image of " +
+        sb.AppendLine("* The isolated sphere, the two spheres and the open two-wire line use the design file's open space (`\"open\": true`, a Kelvin image of " +
                       "everything beyond a truncation circle; docs/methods.md). The other open-space references (wires, microstrip) are " +
                       "modelled inside a far grounded boundary; its effect is stated in the tolerance note and in the design file.");
         sb.AppendLine("* Corner exponents: the recovered field |E*| is sampled along the bisector at r0, 2r0, 4r0, 8r0, 16r0 from the corner, " +

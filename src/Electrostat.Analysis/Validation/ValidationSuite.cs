@@ -28,6 +28,7 @@ public static class ValidationSuite
         const string griffithsCh2 = "Griffiths, Introduction to Electrodynamics, ch. 2 (Gauss's law)";
         const string rwv = "Ramo, Whinnery & Van Duzer, Fields and Waves in Communication Electronics (image line charges)";
         const string capTol = "default accuracy target 0.5 %";
+        const string smythe2 = "Smythe, Static and Dynamic Electricity, ch. 5 (bispherical image series; from memory)";
         const string peakTol = "point value: 1 %";
         var list = new List<ValidationCase>
         {
@@ -75,6 +76,12 @@ public static class ValidationSuite
             new("Isolated sphere: peak |E| at r = a", griffithsCh2, ["isolated-sphere.json"],
                 ReferenceFormulas.IsolatedSpherePeakField(10 * Mm, 1), "V/m", 1, 0.01, peakTol, true,
                 o => SolutionProbe.PeakField(o[0])),
+            new("Two equal spheres d/a = 3 in open space: c11", smythe2, ["two-spheres-open.json"],
+                ReferenceFormulas.TwoEqualSpheresCoefficients(10 * Mm, 30 * Mm).Self, "pF", 1e12, 0.005, capTol, true,
+                o => SolutionProbe.Maxwell(o[0], "upper", "upper")),
+            new("Two equal spheres d/a = 3 in open space: c12", smythe2, ["two-spheres-open.json"],
+                ReferenceFormulas.TwoEqualSpheresCoefficients(10 * Mm, 30 * Mm).Mutual, "pF", 1e12, 0.005, capTol, true,
+                o => SolutionProbe.Maxwell(o[0], "upper", "lower")),
             new("Two-wire line d/a = 10 in open space (planar, Kelvin open boundary): C'", rwv, ["two-wire-open.json"],
                 ReferenceFormulas.TwoWireCapacitancePerMetre(1 * Mm, 10 * Mm), "pF/m", 1e12, 0.005, capTol, true,
                 o => SolutionProbe.Mutual(o[0], "left", "right")),

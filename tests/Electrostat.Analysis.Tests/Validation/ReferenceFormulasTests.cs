@@ -59,4 +59,22 @@ public class ReferenceFormulasTests
         double ratio = ReferenceFormulas.MicrostripCapacitancePerMetre(1, 4.4) / cAir;
         Assert.InRange(ratio, (4.4 + 1) / 2, 4.4);
     }
+
+    [Fact]
+    public void TwoSpheres_LimitsOfTheSeries()
+    {
+        double a = 0.01;
+        double isolated = 4 * Math.PI * Eps0 * a;
+        // Far apart each sphere is isolated: c11 → 4πε0a, and c12 → −4πε0a·(a/d) (the first image term, Smythe ch. 5).
+        var far = ReferenceFormulas.TwoEqualSpheresCoefficients(a, 1000 * a);
+        Assert.Equal(1, far.Self / isolated, 5);
+        Assert.Equal(-1e-3, far.Mutual / isolated, 6);
+        // Touching spheres at one potential hold 2(c11 + c12) = 8πε0a·ln 2 (Maxwell's result for two touching equal
+        // spheres; Smythe ch. 5, from memory); the alternating series approaches it as d → 2a.
+        var touching = ReferenceFormulas.TwoEqualSpheresCoefficients(a, 2 * a * (1 + 1e-8));
+        Assert.Equal(8 * Math.PI * Eps0 * a * Math.Log(2), 2 * (touching.Self + touching.Mutual), 1e-4 * isolated);
+        // Symmetric and physical: c11 > 0 > c12 and c11 + c12 > 0 (capacitance to infinity).
+        var mid = ReferenceFormulas.TwoEqualSpheresCoefficients(a, 3 * a);
+        Assert.True(mid.Self > 0 && mid.Mutual < 0 && mid.Self + mid.Mutual > 0);
+    }
 }
