@@ -405,12 +405,13 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         // Infinity is a reference at the enclosure potential in axisymmetric open space; planar open space has none.
         if (wallLines.Length > 0 || (enclosure.IsOpen && axisymmetric)) potentials.Add(enclosure.PotentialVolts);
         bool charged = conductors.Any(c => c.ChargeCoulombs is double q && q != 0);
-        if (enclosure.IsOpen && !axisymmetric && potentials.Count < 2 && !earlierErrors)
+        if (enclosure.IsOpen && !axisymmetric && !earlierErrors && (potentials.Count == 0 || (potentials.Count < 2 && !charged)))
         {
-            // In 2D open space infinity is free and the charges must sum to zero: only a potential difference between
-            // conductors drives a field (a lone line charge would have a logarithmically infinite potential).
+            // In 2D open space infinity is free and the charges must sum to zero: a fixed conductor must take the return
+            // charge, and something (a potential difference or a floating charge) must drive the field; a lone line
+            // charge would have a logarithmically infinite potential.
             Sink.Error(conductors.Count > 0 ? conductors[0].Token.Parent : null,
-                "a planar design in open space needs conductors at two different potentials: a lone conductor in 2D open space has no finite capacitance",
+                "a planar design in open space needs conductors at two different potentials (or a fixed conductor beside a charged floating one): a lone conductor in 2D open space has no finite capacitance",
                 "add the return conductor (a second wire, a ground plane) at another potential, or use a closed enclosure as the return");
             ok = false;
         }
