@@ -41,6 +41,9 @@ public static class SingularCornerDetector
         ArgumentNullException.ThrowIfNull(context);
         var outlines = ConductorOutline.Of(context.Design, context.ConductorPotentialVolts);
         var corners = FindCorners(context.Design);
+        var junctions = FindJunctions(context);
+        double same = 1e-9 * context.Design.Bounds.Diagonal;
+        bool At(Point2 a, Point2 b) => Math.Sqrt(Sq(a.X - b.X) + Sq(a.Y - b.Y)) < same;
         var topo = context.Topology;
         var mesh = context.Mesh;
         var list = new List<SingularCorner>();
@@ -73,7 +76,9 @@ public static class SingularCornerDetector
             }
             bool resolved = h <= 0.5 * delta;
             double betaDeg = c.FieldSideAngleRadians * 180 / Math.PI;
-            double exponent = Math.PI / c.FieldSideAngleRadians - 1;
+            // A corner on a material interface takes the exponent of its sectors (the junction at the same point).
+            var sectors = junctions.FirstOrDefault(j => At(j.Location, c.Location));
+            double exponent = sectors is not null ? sectors.Lambda - 1 : Math.PI / c.FieldSideAngleRadians - 1;
             var inv = CultureInfo.InvariantCulture;
             string fieldText = field is double f
                 ? string.Format(inv, "|E| = {0:G4} kV/mm at {1:G3} mm from the corner on the bisector{2}", f * 1e-6, delta * 1e3,
@@ -84,7 +89,149 @@ public static class SingularCornerDetector
                 c.ConductorName, c.Location.ToMillimetreString(), betaDeg, exponent, fieldText, fillet * 1e3, gap * 1e3);
             list.Add(new SingularCorner(c.ConductorName, c.ConductorIndex, c.Location, betaDeg, exponent, gap, fillet, delta, field, material, resolved, warning));
         }
+        foreach (var j in junctions)
+        {
+            // A corner at the same place is reported once, as a corner (with the junction's exponent).
+            if (list.Any(c => At(c.Location, j.Location))) continue;
+            list.Add(Junction(context, outlines, j));
+        }
         return list;
+    }
+
+    /// <summary>A junction found on the mesh: the conductor, the point, the bisector of its field side, the sectors
+    /// (angle, material) from one conductor face to the other, and the exponent λ.</summary>
+    private sealed record JunctionGeometry(int ConductorIndex, Point2 Location, double BisectorX, double BisectorY,
+        IReadOnlyList<(double Angle, Material Material)> Sectors, double Lambda);
+
+    /// <summary>Junctions with λ at or above this are not reported: |E| ∝ r^(λ−1) then grows by less than 15 % over six
+    /// decades of distance (our own threshold; the sampled angles of a junction on a slightly curved surface put a
+    /// right-angled contact at λ = 0.998 instead of 1).</summary>
+    private const double MaxJunctionLambda = 0.99;
+
+    /// <summary>Smallest sector angle treated as a wedge; thinner slivers (a body resting tangentially on another) are
+    /// cusps, whose field is not a power of r, and are not classified.</summary>
+    private const double MinSectorRadians = 2 * Math.PI / 180;
+
+    /// <summary>
+    /// Triple junctions: mesh vertices on a conductor surface that also lie on a material interface. The exact geometry
+    /// is sampled on a small circle around each (a quarter of the shortest mesh edge there, 720 directions, every
+    /// material boundary located by bisection); each run of field region between conductor faces that holds at least
+    /// two materials gives its sectors to <see cref="WedgeExponent"/>, and λ &lt; <see cref="MaxJunctionLambda"/> is singular.
+    /// </summary>
+    private static List<JunctionGeometry> FindJunctions(AnalysisContext context)
+    {
+        var result = new List<JunctionGeometry>();
+        var design = context.Design;
+        var topo = context.Topology;
+        var mesh = context.Mesh;
+        const int n = 720;
+        for (int v = 0; v < mesh.VertexCount; v++)
+        {
+            if (topo.VertexConductor[v] < 0 || !topo.VertexOnInterface[v]) continue;
+            double shortest = double.PositiveInfinity;
+            foreach (int t in topo.TrianglesAround(v))
+            {
+                for (int i = 0; i < 3; i++)
+                {
+                    int w = mesh.Triangles[3 * t + i];
+                    if (w != v) shortest = Math.Min(shortest, Math.Sqrt(Sq(mesh.X[w] - mesh.X[v]) + Sq(mesh.Y[w] - mesh.Y[v])));
+                }
+            }
+            if (!double.IsFinite(shortest)) continue;
+            double rho = 0.25 * shortest, x0 = mesh.X[v], y0 = mesh.Y[v];
+            RegionHit At(double angle) => design.Classify(x0 + rho * Math.Cos(angle), y0 + rho * Math.Sin(angle));
+            int Key(RegionHit h) => h.Kind switch { RegionKind.Conductor => -1, RegionKind.Background => 0, RegionKind.Dielectric => h.Index + 1, _ => int.MinValue };
+            var keys = new int[n];
+            for (int k = 0; k < n; k++) keys[k] = Key(At(2 * Math.PI * k / n));
+            if (keys.Contains(int.MinValue)) continue; // on the enclosure wall or a symmetry plane: not a free junction
+            int start = Array.IndexOf(keys, -1);
+            if (start < 0) continue;
+            // Walk once round from a conductor sample; every change of key is located by bisection.
+            var boundaries = new List<(double Angle, int Before, int After)>();
+            for (int k = 0; k < n; k++)
+            {
+                int a = (start + k) % n, b = (start + k + 1) % n;
+                if (keys[a] == keys[b]) continue;
+                double lo = 2 * Math.PI * (start + k) / n, hi = lo + 2 * Math.PI / n;
+                for (int it = 0; it < 40; it++)
+                {
+                    double mid = 0.5 * (lo + hi);
+                    if (Key(At(mid)) == keys[a]) lo = mid; else hi = mid;
+                }
+                boundaries.Add((0.5 * (lo + hi), keys[a], keys[b]));
+            }
+            // Runs: from a boundary leaving the conductor to the next boundary entering it.
+            for (int i = 0; i < boundaries.Count; i++)
+            {
+                if (boundaries[i].Before != -1) continue;
+                var sectors = new List<(double Angle, Material Material)>();
+                double first = boundaries[i].Angle;
+                int j = i;
+                bool closed = false;
+                while (true)
+                {
+                    var (angle, _, after) = boundaries[j];
+                    int next = (j + 1) % boundaries.Count;
+                    double end = boundaries[next].Angle;
+                    double width = end - angle;
+                    if (width <= 0) width += 2 * Math.PI;
+                    sectors.Add((width, after == 0 ? design.BackgroundMaterial : design.Dielectrics[after - 1].Material));
+                    j = next;
+                    if (boundaries[j].After == -1) { closed = true; break; }
+                    if (j == i) break;
+                }
+                if (!closed || sectors.Select(s => s.Material.Name).Distinct().Count() < 2) continue;
+                if (sectors.Any(s => s.Angle < MinSectorRadians)) continue;
+                double lambda = WedgeExponent.Smallest(sectors.Select(s => (s.Angle, s.Material.RelativePermittivity)).ToArray());
+                if (!(lambda < MaxJunctionLambda)) continue;
+                double mid = first + 0.5 * sectors.Sum(s => s.Angle);
+                result.Add(new JunctionGeometry(topo.VertexConductor[v], new Point2(x0, y0), Math.Cos(mid), Math.Sin(mid), sectors, lambda));
+            }
+        }
+        return result;
+    }
+
+    private static SingularCorner Junction(AnalysisContext context, IReadOnlyList<ConductorOutline> outlines, JunctionGeometry j)
+    {
+        var conductor = context.Design.Conductors[j.ConductorIndex];
+        var own = outlines.FirstOrDefault(o => o.ConductorIndex == j.ConductorIndex);
+        double gap = double.PositiveInfinity;
+        foreach (var o in outlines)
+        {
+            if (own is null || o == own || !(Math.Abs(o.PotentialVolts - own.PotentialVolts) > 0)) continue;
+            gap = Math.Min(gap, o.DistanceTo(j.Location).Distance);
+        }
+        if (!double.IsFinite(gap)) gap = context.Design.Bounds.Diagonal;
+        double delta = ReportDistanceFraction * gap;
+        double? field = null;
+        string? material = null;
+        if (context.Recovered.TryEvaluate(j.Location.X + delta * j.BisectorX, j.Location.Y + delta * j.BisectorY, out double ex, out double ey, out int t))
+        {
+            field = Math.Sqrt(ex * ex + ey * ey);
+            material = context.MaterialOfRegion(context.Mesh.TriangleRegion[t])?.Name;
+        }
+        var topo = context.Topology;
+        double h = double.PositiveInfinity, best = double.PositiveInfinity;
+        for (int v = 0; v < context.Mesh.VertexCount; v++)
+        {
+            double d = Sq(context.Mesh.X[v] - j.Location.X) + Sq(context.Mesh.Y[v] - j.Location.Y);
+            if (d < best) { best = d; h = topo.LocalSizeMetres[v]; }
+        }
+        bool resolved = h <= 0.5 * delta;
+        var inv = CultureInfo.InvariantCulture;
+        double total = j.Sectors.Sum(s => s.Angle);
+        string sectors = string.Join(", ", j.Sectors.Select(s => string.Format(inv, "{0} {1:F0}°", s.Material.Name, s.Angle * 180 / Math.PI)));
+        string fieldText = field is double f
+            ? string.Format(inv, "|E| = {0:G4} kV/mm at {1:G3} mm from it{2}", f * 1e-6, delta * 1e3,
+                resolved ? "" : " (mesh coarser than that distance: refine for a resolved value)")
+            : "the field near it could not be evaluated";
+        string warning = string.Format(inv,
+            "Triple junction of '{0}' at {1}: the materials meet the conductor as {2}, so the exact field is infinite there (it grows as r^{3:F3}) and any peak value at the junction is mesh-dependent; {4}. Make the denser dielectric meet the conductor at 90° or less, or recess the junction into a low-field pocket.",
+            conductor.Name, j.Location.ToMillimetreString(), sectors, j.Lambda - 1, fieldText);
+        return new SingularCorner(conductor.Name, j.ConductorIndex, j.Location, total * 180 / Math.PI, j.Lambda - 1, gap, 0, delta, field, material, resolved, warning)
+        {
+            Kind = SingularPointKind.TripleJunction,
+        };
     }
 
     /// <summary>

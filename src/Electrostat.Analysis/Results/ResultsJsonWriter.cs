@@ -262,6 +262,7 @@ public static class ResultsJsonWriter
         foreach (var c in an.SingularCorners)
         {
             w.WriteStartObject();
+            w.WriteString("kind", c.Kind == Corners.SingularPointKind.TripleJunction ? "triple_junction" : "corner");
             w.WriteString("conductor", c.ConductorName);
             Num(w, "x_m", c.Location.X);
             Num(w, "y_m", c.Location.Y);
@@ -269,7 +270,7 @@ public static class ResultsJsonWriter
             Num(w, "field_exponent", c.FieldExponent);
             Num(w, "report_distance_m", c.ReportDistanceMetres);
             Num(w, "field_at_report_distance_V_per_m", c.FieldAtReportDistanceVoltsPerMetre);
-            Num(w, "suggested_fillet_radius_m", c.SuggestedFilletRadiusMetres);
+            Num(w, "suggested_fillet_radius_m", c.Kind == Corners.SingularPointKind.TripleJunction ? null : c.SuggestedFilletRadiusMetres);
             w.WriteString("material", c.MaterialName);
             w.WriteBoolean("resolved_by_mesh", c.ResolvedByMesh);
             w.WriteString("warning", c.Warning);

@@ -116,6 +116,12 @@ public static class ValidationSuite
         list.Add(new ValidationCase("Knife edge: |E(r/2)|/|E(r)| = 2^(1/2)", jackson, ["knife-edge.json"],
             Math.Sqrt(2), "", 1, 0.03, cornerTol,
             false, o => SolutionProbe.CornerFieldRatio(o[0], 20 * Mm, 0, 1, 0, 0.05 * Mm, 4)));
+        double junctionLambda = Corners.WedgeExponent.Smallest([(0.75 * Math.PI, 4.0), (0.25 * Math.PI, 1.0)]);
+        list.Add(new ValidationCase("Triple junction, εr 4 meeting an electrode at 135°: |E(r/2)|/|E(r)| = 2^(1−λ)",
+            "Meixner, IEEE Trans. Antennas Propag. 20(4), 1972 (dielectric-wedge edge condition; λ solved by bisection)", ["triple-junction.json"],
+            Math.Pow(2, 1 - junctionLambda), "", 1, 0.03,
+            "exponent of φ − V fitted along the junction's bisector over four doublings of r from 0.05 mm or two local element sizes", false,
+            o => SolutionProbe.CornerFieldRatioFromPotential(o[0], 1, 10 * Mm, 10 * Mm, 0, -1, 0.05 * Mm, 4)));
         list.Add(new ValidationCase("Floating conductor midway between plates: potential",
             "Griffiths, Introduction to Electrodynamics, §3.1.6 (uniqueness; symmetry gives V/2)", ["floating-midplane.json"],
             0.5, "V", 1, 0.005, "0.5 % (discretisation of an unsymmetric mesh)", false,

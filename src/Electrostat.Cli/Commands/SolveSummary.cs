@@ -21,7 +21,7 @@ internal static class SolveSummary
         w.WriteLine($"design     {designPath}{(o.Design.Title is null ? "" : "  (" + o.Design.Title + ")")}");
         w.WriteLine(string.Create(c, $"verdict    {Word(an.Verdict)}"));
         w.WriteLine(string.Create(c, $"mesh       {a.Mesh.Mesh.TriangleCount} triangles after {a.Levels.Count} levels; {(a.Converged ? a.StopReason : "NOT CONVERGED: " + a.StopReason.Replace("not converged: ", "", StringComparison.Ordinal))}; {o.TotalSeconds:F2} s"));
-        w.WriteLine("peak field per material (error estimate; singular corners excluded)");
+        w.WriteLine("peak field per material (error estimate; singular corners and junctions excluded)");
         foreach (var p in a.Levels[^1].Peaks)
         {
             var e = a.PeakErrors.GetValueOrDefault(p.MaterialName);

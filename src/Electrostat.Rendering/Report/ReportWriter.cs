@@ -159,19 +159,19 @@ public static class ReportWriter
             h.Raw($"<tr><td class=\"n\">{s.Rank}</td><td class=\"n\" data-si=\"{R(s.XMetres)}\">").Text(Num(s.XMetres / unit.Metres)).Raw($"</td><td class=\"n\" data-si=\"{R(s.YMetres)}\">").Text(Num(s.YMetres / unit.Metres))
                 .Raw($"</td><td class=\"n\" data-si=\"{R(s.FieldVoltsPerMetre)}\">").Text(Num(s.FieldKilovoltsPerMillimetre)).Raw("</td><td>").Text(s.MaterialName ?? "—").Raw("</td><td>").Text(Kind(s.Kind))
                 .Raw("</td><td>").Text($"{s.NearestFeature} ({Num(s.NearestFeatureDistanceMetres / unit.Metres)} {unit.Symbol})").Raw("</td><td class=\"n\">").Text(s.Margin is double mg ? Num(mg) : "—")
-                .Raw("</td><td>").Text(s.NearSingularCorner ? "near a sharp corner: mesh-dependent" : "").Raw("</td></tr>");
+                .Raw("</td><td>").Text(s.NearSingularCorner ? "near a singular corner or junction: mesh-dependent" : "").Raw("</td></tr>");
         }
         h.Raw("</tbody></table>\n");
         h.Raw("<p class=\"note\">").Text($"Coordinates in {unit.Symbol}{(planar ? "" : " (x = r, y = z)")}. Field values are recovered nodal values on the side of the named material.").Raw("</p>");
         if (a.FieldEnhancement is { } fe)
         {
-            h.Raw("<p id=\"field-enhancement\">").Text($"Field enhancement factor f = E_max / (ΔV/d) = {Num(fe.Factor)} (utilisation factor η = {Num(fe.Utilisation)}): the peak of {Num(fe.PeakFieldVoltsPerMetre * 1e-6)} kV/mm in {fe.PeakMaterial} against the mean field {Num(fe.MeanGapFieldVoltsPerMetre * 1e-6)} kV/mm of the most stressed gap, {fe.ConductorA} – {fe.ConductorB} ({Labels.Volts(fe.VoltageDifferenceVolts)} across {Num(fe.GapMetres / unit.Metres)} {unit.Symbol}). f = 1 is a uniform field; singular corners are excluded.").Raw("</p>");
+            h.Raw("<p id=\"field-enhancement\">").Text($"Field enhancement factor f = E_max / (ΔV/d) = {Num(fe.Factor)} (utilisation factor η = {Num(fe.Utilisation)}): the peak of {Num(fe.PeakFieldVoltsPerMetre * 1e-6)} kV/mm in {fe.PeakMaterial} against the mean field {Num(fe.MeanGapFieldVoltsPerMetre * 1e-6)} kV/mm of the most stressed gap, {fe.ConductorA} – {fe.ConductorB} ({Labels.Volts(fe.VoltageDifferenceVolts)} across {Num(fe.GapMetres / unit.Metres)} {unit.Symbol}). f = 1 is a uniform field; singular corners and junctions are excluded.").Raw("</p>");
         }
         h.EndSection();
 
         // 5. Margins
         h.Section(5, "margins", "Breakdown margins per material");
-        h.Raw("<table id=\"margin-table\"><thead><tr><th>material</th><th>breakdown (kV/mm)</th><th>peak |E| (kV/mm)</th><th>at</th><th>margin</th><th>required</th><th>verdict</th><th>at sharp corner (kV/mm)</th></tr></thead><tbody>");
+        h.Raw("<table id=\"margin-table\"><thead><tr><th>material</th><th>breakdown (kV/mm)</th><th>peak |E| (kV/mm)</th><th>at</th><th>margin</th><th>required</th><th>verdict</th><th>at singular point (kV/mm)</th></tr></thead><tbody>");
         foreach (var m in a.Margins.Materials)
         {
             h.Raw("<tr><td>").Text(m.MaterialName).Raw($"</td><td class=\"n\" data-si=\"{R(m.BreakdownFieldVoltsPerMetre)}\">").Text(m.BreakdownFieldVoltsPerMetre is double b ? Num(b * 1e-6) : "—")
@@ -179,7 +179,7 @@ public static class ReportWriter
                 .Raw($"</td><td class=\"n\" data-si=\"{R(m.Margin)}\">").Text(m.Margin is double mg ? Num(mg) : "—").Raw("</td><td class=\"n\">").Text(m.RequiredMargin is double rq ? Num(rq) : "—")
                 .Raw($"</td><td class=\"v {VerdictClass(m.Verdict)}\">").Text(Verdict(m.Verdict)).Raw("</td><td class=\"n\">").Text(m.SingularCornerFieldVoltsPerMetre is double sc ? Num(sc * 1e-6) : "—").Raw("</td></tr>");
         }
-        h.Raw("</tbody></table>\n<p class=\"note\">Margin = breakdown field ÷ peak field in that material. Values at sharp re-entrant corners grow with mesh refinement and are listed separately.</p>");
+        h.Raw("</tbody></table>\n<p class=\"note\">Margin = breakdown field ÷ peak field in that material. Values at sharp re-entrant corners and singular triple junctions grow with mesh refinement and are listed separately.</p>");
         h.EndSection();
 
         // 6. Clearances
