@@ -44,37 +44,11 @@ public static class SingularCornerDetector
         var junctions = FindJunctions(context);
         double same = 1e-9 * context.Design.Bounds.Diagonal;
         bool At(Point2 a, Point2 b) => Math.Sqrt(Sq(a.X - b.X) + Sq(a.Y - b.Y)) < same;
-        var topo = context.Topology;
-        var mesh = context.Mesh;
         var list = new List<SingularCorner>();
         foreach (var c in corners)
         {
-            var own = outlines.First(o => o.ConductorIndex == c.ConductorIndex);
-            double gap = double.PositiveInfinity;
-            foreach (var o in outlines)
-            {
-                if (o == own || !(Math.Abs(o.PotentialVolts - own.PotentialVolts) > 0)) continue;
-                gap = Math.Min(gap, o.DistanceTo(c.Location).Distance);
-            }
-            if (!double.IsFinite(gap)) gap = context.Design.Bounds.Diagonal;
-            double delta = ReportDistanceFraction * gap;
+            var (gap, delta, field, material, resolved) = Measure(context, outlines, c.ConductorIndex, c.Location, c.BisectorX, c.BisectorY);
             double fillet = Math.Min(FilletFraction * gap, 0.5 * c.ShorterEdgeMetres);
-            double px = c.Location.X + delta * c.BisectorX, py = c.Location.Y + delta * c.BisectorY;
-            double? field = null;
-            string? material = null;
-            if (context.Recovered.TryEvaluate(px, py, out double ex, out double ey, out int t))
-            {
-                field = Math.Sqrt(ex * ex + ey * ey);
-                material = context.MaterialOfRegion(mesh.TriangleRegion[t])?.Name;
-            }
-            // Mesh size at the corner: the nearest vertex's mean edge length.
-            double h = double.PositiveInfinity, best = double.PositiveInfinity;
-            for (int v = 0; v < mesh.VertexCount; v++)
-            {
-                double d = Sq(mesh.X[v] - c.Location.X) + Sq(mesh.Y[v] - c.Location.Y);
-                if (d < best) { best = d; h = topo.LocalSizeMetres[v]; }
-            }
-            bool resolved = h <= 0.5 * delta;
             double betaDeg = c.FieldSideAngleRadians * 180 / Math.PI;
             // A corner on a material interface takes the exponent of its sectors (the junction at the same point).
             var sectors = junctions.FirstOrDefault(j => At(j.Location, c.Location));
@@ -191,33 +165,44 @@ public static class SingularCornerDetector
         return result;
     }
 
-    private static SingularCorner Junction(AnalysisContext context, IReadOnlyList<ConductorOutline> outlines, JunctionGeometry j)
+    /// <summary>
+    /// What is reported at a singular point: the local gap (distance to the nearest outline at another potential, the
+    /// design's size when there is none), the report distance δ, the recovered field and material at δ along the
+    /// bisector, and whether the mesh there (the nearest vertex's mean edge length) is finer than δ/2.
+    /// </summary>
+    private static (double Gap, double Delta, double? Field, string? Material, bool Resolved) Measure(AnalysisContext context,
+        IReadOnlyList<ConductorOutline> outlines, int conductorIndex, Point2 location, double bisectorX, double bisectorY)
     {
-        var conductor = context.Design.Conductors[j.ConductorIndex];
-        var own = outlines.FirstOrDefault(o => o.ConductorIndex == j.ConductorIndex);
+        var own = outlines.FirstOrDefault(o => o.ConductorIndex == conductorIndex);
         double gap = double.PositiveInfinity;
         foreach (var o in outlines)
         {
             if (own is null || o == own || !(Math.Abs(o.PotentialVolts - own.PotentialVolts) > 0)) continue;
-            gap = Math.Min(gap, o.DistanceTo(j.Location).Distance);
+            gap = Math.Min(gap, o.DistanceTo(location).Distance);
         }
         if (!double.IsFinite(gap)) gap = context.Design.Bounds.Diagonal;
         double delta = ReportDistanceFraction * gap;
         double? field = null;
         string? material = null;
-        if (context.Recovered.TryEvaluate(j.Location.X + delta * j.BisectorX, j.Location.Y + delta * j.BisectorY, out double ex, out double ey, out int t))
+        var mesh = context.Mesh;
+        if (context.Recovered.TryEvaluate(location.X + delta * bisectorX, location.Y + delta * bisectorY, out double ex, out double ey, out int t))
         {
             field = Math.Sqrt(ex * ex + ey * ey);
-            material = context.MaterialOfRegion(context.Mesh.TriangleRegion[t])?.Name;
+            material = context.MaterialOfRegion(mesh.TriangleRegion[t])?.Name;
         }
-        var topo = context.Topology;
         double h = double.PositiveInfinity, best = double.PositiveInfinity;
-        for (int v = 0; v < context.Mesh.VertexCount; v++)
+        for (int v = 0; v < mesh.VertexCount; v++)
         {
-            double d = Sq(context.Mesh.X[v] - j.Location.X) + Sq(context.Mesh.Y[v] - j.Location.Y);
-            if (d < best) { best = d; h = topo.LocalSizeMetres[v]; }
+            double d = Sq(mesh.X[v] - location.X) + Sq(mesh.Y[v] - location.Y);
+            if (d < best) { best = d; h = context.Topology.LocalSizeMetres[v]; }
         }
-        bool resolved = h <= 0.5 * delta;
+        return (gap, delta, field, material, h <= 0.5 * delta);
+    }
+
+    private static SingularCorner Junction(AnalysisContext context, IReadOnlyList<ConductorOutline> outlines, JunctionGeometry j)
+    {
+        var conductor = context.Design.Conductors[j.ConductorIndex];
+        var (gap, delta, field, material, resolved) = Measure(context, outlines, j.ConductorIndex, j.Location, j.BisectorX, j.BisectorY);
         var inv = CultureInfo.InvariantCulture;
         double total = j.Sectors.Sum(s => s.Angle);
         string sectors = string.Join(", ", j.Sectors.Select(s => string.Format(inv, "{0} {1:F0}°", s.Material.Name, s.Angle * 180 / Math.PI)));
