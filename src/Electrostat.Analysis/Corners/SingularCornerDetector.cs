@@ -88,7 +88,7 @@ public static class SingularCornerDetector
 
     /// <summary>
     /// Triple junctions: mesh vertices on a conductor surface that also lie on a material interface. The exact geometry
-    /// is sampled on a small circle around each (a quarter of the shortest mesh edge there, 720 directions, every
+    /// is sampled on a small circle around each (a quarter of the shortest mesh edge there, 360 directions, every
     /// material boundary located by bisection); each run of field region between conductor faces that holds at least
     /// two materials gives its sectors to <see cref="WedgeExponent"/>, and λ &lt; <see cref="MaxJunctionLambda"/> is singular.
     /// </summary>
@@ -98,7 +98,7 @@ public static class SingularCornerDetector
         var design = context.Design;
         var topo = context.Topology;
         var mesh = context.Mesh;
-        const int n = 720;
+        const int n = 360; // one sample per degree: every sector wider than MinSectorRadians holds a sample
         for (int v = 0; v < mesh.VertexCount; v++)
         {
             if (topo.VertexConductor[v] < 0 || !topo.VertexOnInterface[v]) continue;
@@ -127,7 +127,7 @@ public static class SingularCornerDetector
                 int a = (start + k) % n, b = (start + k + 1) % n;
                 if (keys[a] == keys[b]) continue;
                 double lo = 2 * Math.PI * (start + k) / n, hi = lo + 2 * Math.PI / n;
-                for (int it = 0; it < 40; it++)
+                for (int it = 0; it < 32; it++) // 1°/2^32: the edge to 4e-12 rad
                 {
                     double mid = 0.5 * (lo + hi);
                     if (Key(At(mid)) == keys[a]) lo = mid; else hi = mid;
