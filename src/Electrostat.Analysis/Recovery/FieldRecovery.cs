@@ -137,8 +137,12 @@ public static class FieldRecovery
         var err = new double[nt];
         double norm = 0;
         var materials = solution.Problem.Materials;
+        // The Kelvin image of open space is not physical space (its axisymmetric permittivity varies as R²/ρ'²): the
+        // indicator and the norm cover the design side only.
+        int image = solution.Problem.OpenBoundary?.ExteriorRegion ?? int.MinValue;
         for (int t = 0; t < nt; t++)
         {
+            if (reg[t] == image) continue;
             var eps = materials[reg[t]].Permittivity;
             double exx = eps.Xx * PhysicalConstants.VacuumPermittivity, exy = eps.Xy * PhysicalConstants.VacuumPermittivity, eyy = eps.Yy * PhysicalConstants.VacuumPermittivity;
             double sum = 0;
