@@ -41,13 +41,14 @@ public static class DesignGraphBuilder
 
         var pieces = new List<Piece>();
         double areaTol = 0;
+        double openChord = design.Enclosure.Open is { } os ? OpenCircleChordLimit(design, os) : double.PositiveInfinity;
         void AddShape(Shape shape, SourceEntity entity, int index)
         {
             int ci = 0;
             foreach (var contour in shape.Contours)
             {
                 for (int k = 0; k < contour.Segments.Count; k++)
-                    areaTol += Cut(contour.Segments[k], new SegmentSource(entity, index, ci, k), chordTol, maxAngle, options, pieces);
+                    areaTol += Cut(contour.Segments[k], new SegmentSource(entity, index, ci, k), chordTol, maxAngle, options, pieces, openChord);
                 ci++;
             }
         }
@@ -235,7 +236,30 @@ public static class DesignGraphBuilder
     }
 
     /// <summary>Cuts one curve into chords; returns the area bound between chords and curve (Σ chord × sagitta), m².</summary>
-    private static double Cut(CurveSegment seg, SegmentSource src, double chordTol, double maxAngle, MeshOptions options, List<Piece> pieces)
+    /// <summary>
+    /// Longest chord allowed on the open-space circle: the smallest clearance between the circle and any body. The
+    /// circle is never refined later, so its chords must not be longer than the gap they face, or the triangles there
+    /// stay as large as the gap and the field in it is never resolved (measured: a sphere 0.3 mm inside a circle cut
+    /// into 1 mm chords came out with a peak 7 % high and an estimate of 0.9 %).
+    /// </summary>
+    private static double OpenCircleChordLimit(Design design, OpenSpace open)
+    {
+        double gap = double.PositiveInfinity;
+        double tol = 1e-4 * open.RadiusMetres;
+        foreach (var shape in design.Conductors.Select(c => c.Shape).Concat(design.Dielectrics.Select(d => d.Shape)))
+        {
+            foreach (var p in shape.Outer.Flatten(tol))
+            {
+                double d = Math.Sqrt((p.X - open.Center.X) * (p.X - open.Center.X) + (p.Y - open.Center.Y) * (p.Y - open.Center.Y));
+                gap = Math.Min(gap, open.RadiusMetres - d);
+            }
+        }
+        // Bodies touching the circle are refused by the loader; the floor only bounds the chord count.
+        return Math.Max(gap, 1e-3 * open.RadiusMetres);
+    }
+
+    private static double Cut(CurveSegment seg, SegmentSource src, double chordTol, double maxAngle, MeshOptions options, List<Piece> pieces,
+        double openChord)
     {
         if (seg is ArcSegment arc)
         {
@@ -251,8 +275,13 @@ public static class DesignGraphBuilder
             double h = options.MaxEdgeLengthMetres ?? double.PositiveInfinity;
             if (options.SizeFunction is not null) h = Math.Min(h, options.SizeFunction(mid.X, mid.Y));
             if (h < 2 * r) n = Math.Max(n, (int)Math.Ceiling(sweep / (2 * Math.Asin(h / (2 * r))) - 1e-9));
-            // The open-space circle is never split later (its image must keep the same vertices): cut it finely now.
-            if (openCircle) n = Math.Max(n, (int)Math.Ceiling(sweep / OpenCircleChordAngle - 1e-9));
+            // The open-space circle is never split later (its image must keep the same vertices): cut it finely now,
+            // at 64 chords per turn and no chord longer than the gap to the nearest body.
+            if (openCircle)
+            {
+                n = Math.Max(n, (int)Math.Ceiling(sweep / OpenCircleChordAngle - 1e-9));
+                if (openChord < 2 * r) n = Math.Max(n, (int)Math.Ceiling(sweep / (2 * Math.Asin(openChord / (2 * r))) - 1e-9));
+            }
             n = Math.Max(n, 1);
             var prev = arc.Start;
             for (int i = 1; i <= n; i++)
