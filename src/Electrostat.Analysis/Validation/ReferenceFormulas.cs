@@ -52,6 +52,22 @@ public static class ReferenceFormulas
     public static double WireOverGroundCapacitancePerMetre(double wireRadiusMetres, double heightMetres) =>
         2 * Math.PI * Eps0 / Math.Acosh(heightMetres / wireRadiusMetres);
 
+    /// <summary>
+    /// The two-wire line of <see cref="TwoWireCapacitancePerMetre"/> inside a grounded circle of radius R centred
+    /// between the wires: each line charge ±λ at ±h has its image ∓λ at ±R²/h (the image of a line charge in a grounded
+    /// circular cylinder; Smythe, Static and Dynamic Electricity, ch. 4, from memory), which lowers the wires' potential
+    /// by λ/(2πε0)·L with L = ln((R²/h + h)/(R²/h − h)): C' = πε0 / (arccosh(h/a) − L), F/m. Second-order terms in
+    /// (a/h)² (h/R)² are left out.
+    /// </summary>
+    /// <param name="wireRadiusMetres">a, metres.</param>
+    /// <param name="centreSpacingMetres">d = 2h, metres.</param>
+    /// <param name="circleRadiusMetres">R ≫ h, metres.</param>
+    public static double TwoWireInGroundedCirclePerMetre(double wireRadiusMetres, double centreSpacingMetres, double circleRadiusMetres)
+    {
+        double h = 0.5 * centreSpacingMetres, image = circleRadiusMetres * circleRadiusMetres / h;
+        return Math.PI * Eps0 / (Math.Acosh(h / wireRadiusMetres) - Math.Log((image + h) / (image - h)));
+    }
+
     /// <summary>Parallel plates with dielectric layers in series: C' = ε0 w / Σ(d_i/εr_i), F/m (Griffiths,
     /// Introduction to Electrodynamics, ch. 4).</summary>
     /// <param name="widthMetres">Plate width w, metres.</param>

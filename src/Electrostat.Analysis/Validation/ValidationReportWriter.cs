@@ -67,8 +67,9 @@ public static class ValidationReportWriter
                       "capacitance for equal and opposite charges; in open space (where the charges sum to zero by themselves) it is the " +
                       "mutual capacitance −C12.");
         sb.AppendLine("* The isolated sphere, the two spheres and the open two-wire line use the design file's open space (`\"open\": true`, a Kelvin image of " +
-                      "everything beyond a truncation circle; docs/methods.md). The other open-space references (wires, microstrip) are " +
-                      "modelled inside a far grounded boundary; its effect is stated in the tolerance note and in the design file.");
+                      "everything beyond a truncation circle; docs/methods.md). The closed two-wire and wire-over-ground cases sit " +
+                      "inside a far grounded circle, which their references include through its image charges; the microstrip's far box " +
+                      "is stated in its tolerance note and design file.");
         sb.AppendLine("* Corner exponents: the recovered field |E*| is sampled along the bisector at r0, 2r0, 4r0, 8r0, 16r0 from the corner, " +
                       "with r0 the larger of 0.05 mm and six lengths of the longest element edge at the corner, and the ratio is 2^(−slope) of a least-squares fit of log|E*| against log r " +
                       "(knife edge). At the 90° corner the adaptive mesh stays too coarse for the recovered field, so the exponent λ of φ − V ~ r^λ " +

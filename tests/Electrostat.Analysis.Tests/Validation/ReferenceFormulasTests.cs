@@ -77,4 +77,17 @@ public class ReferenceFormulasTests
         var mid = ReferenceFormulas.TwoEqualSpheresCoefficients(a, 3 * a);
         Assert.True(mid.Self > 0 && mid.Mutual < 0 && mid.Self + mid.Mutual > 0);
     }
+
+    [Fact]
+    public void TwoWireInACircle_TendsToTheOpenLine_AndMatchesTheSmallImageEstimate()
+    {
+        double a = 1e-3, d = 10e-3, h = d / 2;
+        double open = ReferenceFormulas.TwoWireCapacitancePerMetre(a, d);
+        // A circle far away changes nothing (to (h/R)² = 1e-8); at R = 50h the images add about 2(h/R)²/arccosh(h/a).
+        Assert.Equal(1, ReferenceFormulas.TwoWireInGroundedCirclePerMetre(a, d, 1e4 * h) / open, 7);
+        double r = 50 * h;
+        double rise = ReferenceFormulas.TwoWireInGroundedCirclePerMetre(a, d, r) / open - 1;
+        // The first-order estimate leaves out terms of relative size L/arccosh(h/a) ≈ 4e-4.
+        Assert.Equal(2 * (h / r) * (h / r) / Math.Acosh(h / a), rise, 1e-6);
+    }
 }
