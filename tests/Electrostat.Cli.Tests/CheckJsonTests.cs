@@ -17,6 +17,19 @@ public class CheckJsonTests
     }
 
     [Fact]
+    public void Json_OpenSpaceDesign_GivesTheTruncationCircle()
+    {
+        // isolated-sphere.json: a 10 mm sphere, margin 15 mm beyond the bounding box's corner (√2·10 mm from the centre).
+        var (exit, stdout, _) = CliRun.Run("check", Path.Combine(RepoPaths.Geometries, "validation", "isolated-sphere.json"), "--json");
+        Assert.Equal(0, exit);
+        var open = JObject.Parse(stdout)["design"]!["open_space"]!;
+        Assert.Equal((Math.Sqrt(2) * 10 + 15) * 1e-3, (double)open["radius_m"]!, 12);
+        Assert.Equal([0.0, 0.0], open["center_m"]!.Select(v => (double)v));
+        var closed = JObject.Parse(CliRun.Run("check", Path.Combine(RepoPaths.Geometries, "hv-electrode-over-plate.json"), "--json").Out);
+        Assert.Equal(JTokenType.Null, closed["design"]!["open_space"]!.Type);
+    }
+
+    [Fact]
     public void Json_InvalidDesign_ExitsTwo_AndLocatesEveryProblem()
     {
         string path = Path.Combine(Path.GetTempPath(), "electrostat-check-json-" + Guid.NewGuid().ToString("N") + ".json");
