@@ -68,4 +68,23 @@ public class OpenSpacePipelineTests
         double c = outcome.Adaptive.Capacitance!.Maxwell[0, 0];
         Assert.True(Math.Abs(c / (4 * Math.PI * 8.8541878128e-12 * 0.01) - 1) < 0.005, $"C = {c:E6}");
     }
+
+    [Fact]
+    public void TheAnswerDoesNotDependOnWhereTheCircleIs()
+    {
+        // The Kelvin map is exact for any truncation radius (Freeman and Lowther 1989): C of the isolated sphere
+        // (4πε0a, Griffiths ch. 2) must come out the same with the circle at 2a and at 5a, up to discretisation.
+        string text = File.ReadAllText(Path.Combine(RepoPaths.Geometries, "validation", "isolated-sphere.json"));
+        double C(double radiusMm)
+        {
+            var t = text.Replace("\"margin\": 15", FormattableString.Invariant($"\"radius\": {radiusMm}"), StringComparison.Ordinal);
+            var design = Electrostat.Geometry.Loading.DesignLoader.LoadFromText(t).Design!;
+            return SolvePipeline.Run(design).Adaptive.Capacitance!.Maxwell[0, 0];
+        }
+        double exact = 4 * Math.PI * 8.8541878128e-12 * 0.01;
+        double near = C(20), far = C(50);
+        Assert.True(Math.Abs(near / exact - 1) < 0.005, $"R = 2a: C = {near:E6}");
+        Assert.True(Math.Abs(far / exact - 1) < 0.005, $"R = 5a: C = {far:E6}");
+        Assert.True(Math.Abs(near / far - 1) < 0.003, $"C changes by {near / far - 1:P3} between R = 2a and 5a");
+    }
 }
