@@ -279,9 +279,9 @@ internal sealed class DesignValidator(ReadContext ctx, ShapeReader shapes)
         {
             foreach (var (b, kind) in all)
             {
-                var far = polys[b].Coordinates.MaxBy(c => Math.Sqrt((c.X - openSpace.Center.X) * (c.X - openSpace.Center.X) + (c.Y - openSpace.Center.Y) * (c.Y - openSpace.Center.Y)))!;
-                double reach = Math.Sqrt((far.X - openSpace.Center.X) * (far.X - openSpace.Center.X) + (far.Y - openSpace.Center.Y) * (far.Y - openSpace.Center.Y));
-                if (reach <= openSpace.RadiusMetres - _touch) continue;
+                var centre = new Coordinate(openSpace.Center.X, openSpace.Center.Y);
+                var far = polys[b].Coordinates.MaxBy(c => c.Distance(centre))!;
+                if (far.Distance(centre) <= openSpace.RadiusMetres - _touch) continue;
                 Sink.Error(b.Token["shape"] ?? b.Token, $"{kind} \"{b.Name}\" touches the open enclosure's circle (radius {UnitTable.Format(openSpace.RadiusMetres, QuantityKind.Length)})",
                     "enlarge \"radius\", or give \"margin\" instead so that the circle clears every body", new Point2(far.X, far.Y));
                 ok = false;
